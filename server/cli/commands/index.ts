@@ -1,0 +1,7 @@
+import type { CliCommand } from "../args";
+
+/**
+ * The command table. Each command lives in its own file in this folder; list it here.
+ * Engine commands (list, evaluate, calc, validate) must not open the database.
+ */
+export const commands: CliCommand[] = [];
