@@ -1,0 +1,117 @@
+import fs from "node:fs";
+import path from "node:path";
+import express from "express";
+import helmet from "helmet";
+import { pinoHttp } from "pino-http";
+import type { AppConfig } from "@server/config";
+import type { Database } from "@server/db";
+import { createLogger, type Logger } from "@server/lib/logger";
+import "@server/lib/express-user";
+import { csrfProtection } from "@server/middleware/csrf";
+import { errorHandler } from "@server/middleware/error-handler";
+import { notFoundHandler } from "@server/middleware/not-found";
+import { healthRouter } from "@server/modules/health/router";
+import { userRepository } from "@server/modules/auth/repository";
+import { authService } from "@server/modules/auth/service";
+import { createSessionLayer } from "@server/modules/auth/session";
+import { authRouter } from "@server/modules/auth/router";
+import { adminService } from "@server/modules/admin/service";
+import { adminRouter } from "@server/modules/admin/router";
+
+/**
+ * Everything the app needs from outside, passed in (tests pass a test database and a silent logger).
+ * Areas that need more add an optional field here (e.g. `kernel?: …`) and read it when mounting.
+ */
+export interface AppDeps {
+  config: AppConfig;
+  db: Database;
+  /** Defaults to a logger at `config.logLevel`. */
+  logger?: Logger;
+  /** How long `/api/health` waits for the database before answering 503. */
+  healthTimeoutMs?: number;
+}
+
+/** JSON bodies above this are refused with 413. Routes taking uploads set their own limit. */
+export const jsonBodyLimit = "1mb";
+
+/**
+ * Builds the Express app without listening (server/index.ts listens; tests use supertest on it).
+ * Order: security headers → request log → health (no session) → body parsing → session + passport →
+ * CSRF → routers → /api 404 → built client (production) → 404 → central error handler.
+ */
+export function createApp(deps: AppDeps): express.Express {
+  const { config, db } = deps;
+  const logger = deps.logger ?? createLogger(config.logLevel);
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", config.trustProxy);
+  app.set("query parser", "simple");
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          "img-src": ["'self'", "data:", "blob:"],
+          "worker-src": ["'self'", "blob:"],
+          "connect-src": ["'self'"],
+        },
+      },
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === "/api/health" },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
+    }),
+  );
+
+  app.use("/api/health", healthRouter(db.sequelize, deps.healthTimeoutMs ?? 1000));
+
+  app.use("/api", express.json({ limit: jsonBodyLimit }));
+  const users = userRepository(db.models);
+  const auth = authService(users);
+  const sessionLayer = createSessionLayer(config, db, auth);
+  app.locals.sessionLayer = sessionLayer;
+  app.use("/api", ...sessionLayer.handlers);
+  app.use("/api", csrfProtection);
+
+  app.use("/api/auth", authRouter(auth, sessionLayer, config.rateLimit));
+  app.use("/api/admin", adminRouter(adminService(users)));
+
+  // --- feature routers ---
+  // Mount each area's router here, one line each: app.use("/api/<area>", <area>Router(deps));
+  // --- end feature routers ---
+
+  app.use("/api", notFoundHandler);
+
+  if (config.serveClient) mountClient(app, config.clientDir, logger);
+
+  app.use(notFoundHandler);
+  app.use(errorHandler(logger));
+  return app;
+}
+
+/**
+ * Serves the built client and answers every other GET with index.html (history fallback, so a reload
+ * of /admin works). /api paths never reach here: they were answered or 404'd above.
+ */
+function mountClient(app: express.Express, clientDir: string, logger: Logger): void {
+  const indexHtml = path.join(clientDir, "index.html");
+  if (!fs.existsSync(indexHtml)) {
+    logger.warn({ clientDir }, "no built client found; run `npx vite build` (npm start does it for you)");
+  }
+  // Vite puts content-hashed files in assets/: cache those for a year, never index.html.
+  app.use(
+    "/assets",
+    express.static(path.join(clientDir, "assets"), { immutable: true, maxAge: "365d", fallthrough: true }),
+  );
+  app.use(express.static(clientDir, { index: false, maxAge: 0 }));
+  app.get("/{*splat}", (req, res, next) => {
+    if (req.path.startsWith("/api/") || req.path === "/api") return next();
+    res.setHeader("Cache-Control", "no-cache");
+    res.sendFile(indexHtml, (err) => {
+      if (err) next(err);
+    });
+  });
+}
