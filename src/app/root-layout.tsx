@@ -1,0 +1,36 @@
+import { Outlet, useNavigation } from "react-router";
+import { SiteFooter } from "@/components/layouts/site-footer";
+import { SiteHeader, type NavItem } from "@/components/layouts/site-header";
+import { AccountMenu } from "@/features/auth/components/account-menu";
+import { useMe } from "@/features/auth/api/get-me";
+import { paths } from "@/lib/paths";
+
+/** The app shell: header with navigation and account, the page, the footer with the safety note. */
+export function RootLayout() {
+  const me = useMe();
+  const navigation = useNavigation();
+  const nav: NavItem[] = [
+    { to: paths.home, label: "Home" },
+    { to: paths.camCheck, label: "Cam check" },
+  ];
+  if (me.data?.role === "admin") nav.push({ to: paths.admin, label: "Accounts" });
+
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2"
+      >
+        Skip to content
+      </a>
+      <SiteHeader nav={nav} account={<AccountMenu />} />
+      <div aria-hidden="true" className="h-1 bg-transparent">
+        {navigation.state === "loading" ? <div className="h-1 w-1/3 animate-pulse bg-spark-500" /> : null}
+      </div>
+      <main id="main" className="flex-1" tabIndex={-1}>
+        <Outlet />
+      </main>
+      <SiteFooter />
+    </div>
+  );
+}

@@ -1,0 +1,34 @@
+import { createBrowserRouter, type RouteObject } from "react-router";
+import { paths } from "@/lib/paths";
+import { AppCrash } from "./app-crash";
+import { LoadingScreen } from "./loading-screen";
+import { RootLayout } from "./root-layout";
+import { RouteError } from "./route-error";
+
+/**
+ * The route table. Each page is its own lazily loaded module (`routes/*.tsx` exporting `Component`),
+ * so the first load carries only the shell and the page asked for.
+ */
+export const routes: RouteObject[] = [
+  {
+    Component: RootLayout,
+    ErrorBoundary: AppCrash,
+    HydrateFallback: LoadingScreen,
+    children: [
+      {
+        ErrorBoundary: RouteError,
+        children: [
+          { index: true, lazy: () => import("./routes/home") },
+          { path: paths.signIn, lazy: () => import("./routes/sign-in") },
+          { path: paths.register, lazy: () => import("./routes/register") },
+          { path: paths.admin, lazy: () => import("./routes/admin") },
+          { path: "*", lazy: () => import("./routes/not-found") },
+        ],
+      },
+    ],
+  },
+];
+
+export function createAppRouter() {
+  return createBrowserRouter(routes);
+}

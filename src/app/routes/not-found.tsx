@@ -1,0 +1,5 @@
+import { NotFound } from "../not-found";
+
+export function Component() {
+  return <NotFound />;
+}
