@@ -1,17 +1,22 @@
 import { ApiError } from "@/lib/api-error";
 
-/** A sentence for the form as a whole, written for the person signing in. */
-export function authFailureMessage(error: unknown, fallback: string | null): string | null {
+/**
+ * A sentence for the form as a whole, written for the person signing in. `rest` is whatever the server
+ * said that no field took (see applyServerFieldErrors).
+ */
+export function authFailureMessage(error: unknown, rest: string | null): string | null {
   if (error instanceof ApiError) {
     if (error.code === "invalid_credentials") {
-      return "That e-mail and password do not match an account. Check both and try again.";
+      // The server deliberately does not say which of the two was wrong; neither do we.
+      const hint = rest && rest !== error.message ? ` ${rest}` : "";
+      return `${error.message}${hint}`;
     }
     if (error.code === "rate_limited" || error.status === 429) {
       const wait = error.retryAfterSeconds;
-      const when = wait ? `in about ${Math.ceil(wait / 60)} minute${wait > 60 ? "s" : ""}` : "in a few minutes";
-      return `Too many sign-in attempts. For your account's safety, wait and try again ${when}.`;
+      const minutes = wait ? Math.max(1, Math.ceil(wait / 60)) : null;
+      const when = minutes ? `in about ${minutes} minute${minutes > 1 ? "s" : ""}` : "in a few minutes";
+      return `Too many sign-in attempts. To protect the account, sign-in is paused: try again ${when}.`;
     }
-    if (error.status === 0) return error.message;
   }
-  return fallback;
+  return rest;
 }
