@@ -24,7 +24,7 @@ export function createDatabase(config: DbConfig, logger?: Logger): Database {
     logging: logger ? (sql: string) => logger.trace({ sql }, "sql") : false,
     timezone: "+00:00",
     define: { charset: "utf8mb4", collate: "utf8mb4_unicode_ci" },
-    dialectOptions: { connectTimeout: 1000, timezone: "Etc/GMT0" },
+    dialectOptions: { connectTimeout: 1000 },
     pool: { max: config.poolMax, min: 0, acquire: 3000, idle: 10_000, evict: 5000 },
     retry: { max: 1 },
   });
