@@ -1,0 +1,16 @@
+/**
+ * The one place that imports every calculator module and registers it. Import this module (not the
+ * registry alone) wherever calculators are looked up: template analyses, HTTP and the CLI.
+ */
+import { registerCalculator } from "./registry";
+import type { Calculator } from "./types";
+import { fitCalculator } from "./fit";
+
+const all: Calculator[] = [
+  fitCalculator,
+];
+
+for (const calculator of all) registerCalculator(calculator);
+
+export { getCalculator, listCalculators } from "./registry";
+export { CalculatorInputError, SETUP_CAUTION, type Calculator, type CalculatorResultMeta, type Source } from "./types";
