@@ -15,8 +15,9 @@ const shaft = (size: number, cls: string) => {
   return [um(l.upper), um(l.lower)];
 };
 
+type Row = [number, string, number, number, string];
 describe("ISO 286 hole limits", () => {
-  it.each([
+  it.each<Row>([
     // [size, class, upper µm, lower µm, source]
     [8, "H7", 15, 0, "ISO 286-2:2010 H7, 6–10 mm: +15/0 (from memory)"],
     [25, "H7", 21, 0, "ISO 286-2:2010 H7, 18–30 mm: +21/0 (from memory)"],
@@ -39,13 +40,13 @@ describe("ISO 286 hole limits", () => {
     [25, "P7", -14, -35, "ISO 286-2:2010 P7, 18–30 mm: −14/−35 (from memory)"],
     [8, "P9", -15, -51, "ISO 286-2:2010 P9, 6–10 mm: −15/−51 (from memory; keyway width 8 P9)"],
     [12, "JS9", 21.5, -21.5, "ISO 286-2:2010 JS9, 10–18 mm: ±21.5 (from memory; keyway width 12 JS9 ±0.0215)"],
-  ] as const)("%s %s = %s/%s µm — %s", (size, cls, upper, lower) => {
+  ])("%s %s = %s/%s µm — %s", (size, cls, upper, lower) => {
     expect(hole(size, cls)).toEqual([upper, lower]);
   });
 });
 
 describe("ISO 286 shaft limits", () => {
-  it.each([
+  it.each<Row>([
     [8, "g6", -5, -14, "ISO 286-2:2010 g6, 6–10 mm: −5/−14 (from memory)"],
     [25, "g6", -7, -20, "ISO 286-2:2010 g6, 18–30 mm: −7/−20 (from memory)"],
     [25, "f7", -20, -41, "ISO 286-2:2010 f7, 18–30 mm: −20/−41 (from memory)"],
@@ -62,30 +63,30 @@ describe("ISO 286 shaft limits", () => {
     [60, "r6", 60, 41, "ISO 286-2:2010 r6, 50–65 mm: +60/+41 (from memory; r = √(p·s) per ISO 286-1)"],
     [100, "s6", 93, 71, "ISO 286-2:2010 s6, 80–100 mm: +93/+71 (computed from ISO 286-1: s = IT7 + 0.4D, D = √(80·100))"],
     [110, "s6", 101, 79, "ISO 286-2:2010 s6, 100–120 mm: +101/+79 (computed from ISO 286-1: s = IT7 + 0.4D)"],
-  ] as const)("%s %s = %s/%s µm — %s", (size, cls, upper, lower) => {
+  ])("%s %s = %s/%s µm — %s", (size, cls, upper, lower) => {
     expect(shaft(size, cls)).toEqual([upper, lower]);
   });
 });
 
 describe("ISO 286-1 standard tolerances and Δ", () => {
-  it.each([
+  it.each<[number, number, number, string]>([
     [1, 11, 0.06, "ISO 286-1:2010 Table 1: IT11 up to 3 mm = 60 µm (from memory)"],
     [40, 5, 0.011, "ISO 286-1:2010 Table 1: IT5 30–50 mm = 11 µm (from memory)"],
     [500, 7, 0.063, "ISO 286-1:2010 Table 1: IT7 400–500 mm = 63 µm (from memory)"],
     [10, 14, 0.36, "ISO 286-1:2010 Table 1: IT14 6–10 mm = 0.36 mm (from memory)"],
     [100, 14, 0.87, "ISO 286-1:2010 Table 1: IT14 80–120 mm = 0.87 mm (from memory)"],
-  ] as const)("IT at %s mm, grade %s = %s mm — %s", (size, grade, value) => {
+  ])("IT at %s mm, grade %s = %s mm — %s", (size, grade, value) => {
     expect(toleranceGrade(size, grade)).toBe(value);
   });
 
-  it.each([
+  it.each<[number, number, number, string]>([
     [5, 8, 6, "ISO 286-1:2010 Table 3: Δ for IT8, 3–6 mm = 6 µm (from memory)"],
     [25, 7, 8, "ISO 286-1:2010 Table 3: Δ for IT7, 18–30 mm = 8 µm (from memory)"],
     [100, 6, 7, "ISO 286-1:2010 Table 3: Δ for IT6, 80–120 mm = 7 µm (from memory)"],
     [450, 8, 34, "ISO 286-1:2010 Table 3: Δ for IT8, 400–500 mm = 34 µm (from memory)"],
     [5, 4, 1.5, "ISO 286-1:2010 Table 3: Δ for IT4, 3–6 mm = 1.5 µm (from memory)"],
     [2, 7, 0, "ISO 286-1:2010 Table 3: Δ = 0 up to 3 mm"],
-  ] as const)("Δ at %s mm, IT%s = %s µm — %s", (size, grade, value) => {
+  ])("Δ at %s mm, IT%s = %s µm — %s", (size, grade, value) => {
     expect(deltaUm(size, grade)).toBe(value);
   });
 
@@ -159,14 +160,14 @@ describe("fit calculator", () => {
     expect(r.cautions.length).toBeGreaterThan(0);
   });
 
-  it.each([
+  it.each<[number, string, string, number, number, string, string]>([
     // ISO 286-2:2010 (from memory) limits combined per ISO 286-1 §3.4 fit definitions.
     [25, "H7", "h6", 0, 0.034, "clearance", "H7 +21/0, h6 0/−13"],
     [25, "H7", "k6", -0.015, 0.019, "transition", "H7 +21/0, k6 +15/+2"],
     [25, "H7", "n6", -0.028, 0.006, "transition", "H7 +21/0, n6 +28/+15"],
     [25, "H7", "p6", -0.035, -0.001, "interference", "H7 +21/0, p6 +35/+22"],
     [100, "H7", "s6", -0.093, -0.036, "interference", "H7 +35/0, s6 +93/+71"],
-  ] as const)("%s %s/%s → %s…%s mm, %s (%s)", (size, h, s, cMin, cMax, kind) => {
+  ])("%s %s/%s → %s…%s mm, %s (%s)", (size, h, s, cMin, cMax, kind) => {
     const r = fitCalculator.compute({ size, hole: h, shaft: s });
     expect([r.clearanceMin, r.clearanceMax, r.kind]).toEqual([cMin, cMax, kind]);
   });
