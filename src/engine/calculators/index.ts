@@ -5,9 +5,15 @@
 import { registerCalculator } from "./registry";
 import type { Calculator } from "./types";
 import { fitCalculator } from "./fit";
+import { eccentricCamCalculator } from "./eccentric-cam";
+import { beamCalculator } from "./beam";
+import { cuttingSpeedCalculator } from "./cutting-speed";
 
 const all: Calculator[] = [
   fitCalculator,
+  eccentricCamCalculator,
+  beamCalculator,
+  cuttingSpeedCalculator,
 ];
 
 for (const calculator of all) registerCalculator(calculator);
