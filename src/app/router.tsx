@@ -22,6 +22,7 @@ export const routes: RouteObject[] = [
           { path: paths.signIn, lazy: () => import("./routes/sign-in") },
           { path: paths.register, lazy: () => import("./routes/register") },
           { path: paths.admin, lazy: () => import("./routes/admin") },
+          { path: paths.camCheck, lazy: () => import("./routes/cam-check") },
           { path: "*", lazy: () => import("./routes/not-found") },
         ],
       },
