@@ -5,12 +5,14 @@
 import { registerCalculator } from "./registry";
 import type { Calculator } from "./types";
 import { fitCalculator } from "./fit";
+import { generalToleranceCalculator } from "./general-tolerance";
 import { eccentricCamCalculator } from "./eccentric-cam";
 import { beamCalculator } from "./beam";
 import { cuttingSpeedCalculator } from "./cutting-speed";
 
 const all: Calculator[] = [
   fitCalculator,
+  generalToleranceCalculator,
   eccentricCamCalculator,
   beamCalculator,
   cuttingSpeedCalculator,
