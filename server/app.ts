@@ -54,6 +54,8 @@ export function createApp(deps: AppDeps): express.Express {
           "img-src": ["'self'", "data:", "blob:"],
           "worker-src": ["'self'", "blob:"],
           "connect-src": ["'self'"],
+          // The app is served over plain http on loopback by default; upgrading would break it there.
+          "upgrade-insecure-requests": null,
         },
       },
     }),
@@ -62,6 +64,11 @@ export function createApp(deps: AppDeps): express.Express {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === "/api/health" },
+      // One short line per request: no headers (they hold cookies and tokens).
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
     }),
   );

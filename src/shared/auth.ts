@@ -5,7 +5,7 @@ import { z } from "zod";
  * See PRODUCT.md "People and roles": a guest is simply someone not signed in (no role value).
  */
 export const roles = ["machinist", "designer", "reviewer", "admin"] as const;
-export const roleSchema = z.enum(roles);
+export const roleSchema = z.enum(roles, { error: `Role must be one of: ${roles.join(", ")}.` });
 export type Role = z.infer<typeof roleSchema>;
 
 /** What each role is for, in one line (used in the admin screen and the CLI help). */
