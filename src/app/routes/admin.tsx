@@ -31,7 +31,7 @@ export function Component() {
     );
   }
   return (
-    <Page title="Accounts" lead="Everyone with a Jigwright account, and the role that decides what they may do.">
+    <Page title="Accounts and roles" lead="Everyone with a Jigwright account, and the role that decides what they may do.">
       <AdminUsers currentUserId={user.id} />
     </Page>
   );

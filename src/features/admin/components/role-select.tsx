@@ -1,20 +1,22 @@
 import { roles, type Role } from "@/shared/auth";
 
-/** A role picker for one user's row; the label names the user so each select is distinct to a screen reader. */
+/** A role picker for one user's row; the label names the user and e-mail so each select is distinct to a screen reader. */
 export function RoleSelect({
   userName,
+  userEmail,
   value,
   disabled,
   onChange,
 }: {
   userName: string;
+  userEmail: string;
   value: Role;
   disabled?: boolean;
   onChange: (role: Role) => void;
 }) {
   return (
     <select
-      aria-label={`Role of ${userName}`}
+      aria-label={`Role of ${userName} (${userEmail})`}
       value={value}
       disabled={disabled}
       onChange={(e) => onChange(e.target.value as Role)}

@@ -49,6 +49,7 @@ export function UsersTable({
         cell: (c) => (
           <RoleSelect
             userName={c.row.original.displayName}
+            userEmail={c.row.original.email}
             value={c.getValue()}
             disabled={pendingUserId === c.row.original.id}
             onChange={(role) => onRoleChange(c.row.original, role)}

@@ -16,7 +16,7 @@ export function AccountMenu() {
   if (!user) {
     return (
       <div className="flex items-center gap-2">
-        <Link to={paths.signIn} className={buttonClasses("quiet", "text-steel-100 hover:bg-steel-800 hover:text-white")}>
+        <Link to={paths.signIn} className={buttonClasses("quietOnDark")}>
           Sign in
         </Link>
         <Link to={paths.register} className={buttonClasses("primary")}>
@@ -33,8 +33,7 @@ export function AccountMenu() {
         <RoleBadge role={user.role} />
       </div>
       <Button
-        variant="secondary"
-        className="border-steel-600 bg-steel-800 text-steel-100 hover:bg-steel-700"
+        variant="onDark"
         disabled={signOut.isPending}
         onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.home) })}
       >

@@ -53,7 +53,7 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
                 Check a cam clamp
               </Link>
               {signedIn ? null : (
-                <Link to={paths.register} className={buttonClasses("secondary", "border-steel-500 bg-steel-800 text-white hover:bg-steel-700")}>
+                <Link to={paths.register} className={buttonClasses("onDark")}>
                   Create a free account
                 </Link>
               )}
