@@ -6,6 +6,7 @@ import { registerCalculator } from "./registry";
 import type { Calculator } from "./types";
 import { fitCalculator } from "./fit";
 import { generalToleranceCalculator } from "./general-tolerance";
+import { threadCalculator } from "./thread";
 import { eccentricCamCalculator } from "./eccentric-cam";
 import { beamCalculator } from "./beam";
 import { cuttingSpeedCalculator } from "./cutting-speed";
@@ -13,6 +14,7 @@ import { cuttingSpeedCalculator } from "./cutting-speed";
 const all: Calculator[] = [
   fitCalculator,
   generalToleranceCalculator,
+  threadCalculator,
   eccentricCamCalculator,
   beamCalculator,
   cuttingSpeedCalculator,
