@@ -14,6 +14,27 @@
  *  - a `turned` base lies on the +z axis, starting at z = 0, centred on x = y = 0; its steps stack upward.
  * `direction` on a cutting feature is the way the tool travels into the material; `at` is the point where
  * it enters (the centre of a hole, the first end-centre of a slot, the centre of a pocket) on that face.
+ *
+ * Exact meaning (the analytic volume in analytic.ts, the solid builders and the drawings all follow it):
+ *  - `through` runs from `at` to the far side of the base's box along `direction`; otherwise `depth` is
+ *    measured from `at`. On a block, `at` may lie on the entry face or inside (a hole from a recess floor).
+ *  - A hole's counterbore is concentric and starts at `at`; a countersink is a cone of `angleDeg`
+ *    (default 90°) from `diameter` at the face down to the hole; `chamfer` is a 45° cone of that leg on the
+ *    entry edge of the outermost diameter (the counterbore when there is one). A hole has a counterbore or
+ *    a countersink, not both, and a countersink carries no extra chamfer.
+ *  - On a turned part, ±z holes are axial (at any x, y inside the face); ±x / ±y holes are radial cross
+ *    holes whose axis is the line through `at` parallel to `direction`; they enter at the outside diameter
+ *    of the step they cross (the along-direction coordinate of `at` is not used) and `depth` is measured at
+ *    the hole's axis from that surface. Radial holes carry no counterbore, countersink or chamfer.
+ *  - An internal thread is modelled as a plain hole of `boreDiameter` (the tap drill, filled in from the
+ *    designation) to `drillDepth`; the thread itself is cosmetic. An external thread is cosmetic on its
+ *    step (the step's diameter is the major diameter).
+ *  - Slots, pockets, steps and V-grooves are for blocks; a V-groove runs the block's whole length along
+ *    `along`. Chamfers act on the base's outside edges (on a turned part only the two end faces, ±z).
+ *  - Eccentric bores are for turned parts: parallel to the axis, offset by `eccentricity` toward
+ *    `angleDeg`, entering from the top (z = overall length, default) or the bottom (z = 0).
+ *  - Pattern copies are translated by `spacing` (linear) or turned about the axis through `centre`
+ *    (circular, axis parallel to the feature's direction); copy 0 is the feature itself.
  */
 import { z } from "zod";
 
@@ -80,6 +101,10 @@ function vocabulary<N extends z.ZodType, S extends z.ZodType, B extends z.ZodTyp
     drillDepth: num.optional(),
     through: z.boolean().optional(),
     chamfer: num.optional(),
+    /** Diameter of the modelled (tap-drill) hole; the engine fills it in from the designation when omitted. */
+    boreDiameter: num.optional(),
+    /** Thread pitch; the engine fills it in from the designation. */
+    pitch: num.optional(),
   });
   const externalThread = z.strictObject({
     kind: z.literal("thread"),
@@ -91,6 +116,10 @@ function vocabulary<N extends z.ZodType, S extends z.ZodType, B extends z.ZodTyp
     /** Thread length measured from the chosen end of the step. */
     length: num,
     from: z.enum(["start", "end"]).optional(),
+    /** Thread pitch; the engine fills it in from the designation. */
+    pitch: num.optional(),
+    /** Minor diameter of the external thread (ISO 724), for the drawing's thin line; filled in by the engine. */
+    minorDiameter: num.optional(),
   });
 
   const slot = z.strictObject({

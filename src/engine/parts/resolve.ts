@@ -1,0 +1,91 @@
+/**
+ * Template parts → {@link ResolvedPart}s: every expression evaluated, `when: false` parts and features
+ * dropped, lengths converted to mm, material expressions turned into catalogue keys, thread data filled in
+ * from the designation, the result checked against the resolved schema and then by the degenerate-geometry
+ * guard. A part with a blocking issue is still returned (drawings of the problem can be useful) but is
+ * marked, and the evaluation says it is not buildable.
+ */
+import type { Scope } from "../expressions";
+import type { CompiledPart } from "../template/compile";
+import { formatPath } from "../template/zod-issues";
+import { resolvedVocabulary, type ResolvedPart } from "./features";
+import { guardPart } from "./guard";
+import type { GeometryIssue, LengthFormatter } from "./issues";
+import { DROPPED, PartFieldError, resolveValue, scaleLengths } from "./template-values";
+import { metricThread, TAP_RUN_OUT_PITCHES } from "./threads";
+
+export interface ResolvePartsOptions {
+  /** Millimetres per template length unit. */
+  mmPerTemplateUnit: number;
+  /** Known material keys; a part naming anything else gets an error issue. */
+  materialKeys: readonly string[];
+  fmt: LengthFormatter;
+}
+
+export interface ResolvedParts {
+  parts: ResolvedPart[];
+  issues: GeometryIssue[];
+  /** Ids of parts that must not reach the solid kernel. */
+  blocked: string[];
+}
+
+/** Fills pitch, modelled bore and default drill depth (internal) or minor diameter (external) of threads. */
+function fillThreadData(feature: Record<string, unknown>, steps: Array<{ diameter: number }> | undefined): void {
+  if (feature.kind === "pattern-linear" || feature.kind === "pattern-circular") {
+    const inner = feature.feature as Record<string, unknown> | undefined;
+    if (inner) fillThreadData(inner, steps);
+    return;
+  }
+  if (feature.kind !== "thread" || typeof feature.designation !== "string") return;
+  const t = metricThread(feature.designation);
+  if (!t) return;
+  feature.pitch ??= t.pitchMm;
+  if (feature.form === "internal") {
+    feature.boreDiameter ??= t.internalMinorDiameterMm;
+    if (!feature.through && typeof feature.depth === "number") feature.drillDepth ??= feature.depth + TAP_RUN_OUT_PITCHES * t.pitchMm;
+  } else if (feature.form === "external" && typeof feature.step === "number") {
+    const step = steps?.[feature.step];
+    if (step) feature.minorDiameter ??= step.diameter - (t.nominalDiameterMm - t.externalMinorDiameterMm);
+  }
+}
+
+export function resolveParts(compiled: readonly CompiledPart[], scope: Scope, options: ResolvePartsOptions): ResolvedParts {
+  const parts: ResolvedPart[] = [];
+  const issues: GeometryIssue[] = [];
+  const blocked = new Set<string>();
+  for (const cp of compiled) {
+    let raw: unknown;
+    try {
+      raw = resolveValue(cp.node, scope);
+    } catch (err) {
+      const reason = err instanceof PartFieldError ? `${err.path}: ${err.reason}` : err instanceof Error ? err.message : String(err);
+      issues.push({ partId: cp.id, code: "unresolved", severity: "error", blocking: true, message: `Part "${cp.id}" could not be worked out for these values (${reason}).` });
+      blocked.add(cp.id);
+      continue;
+    }
+    if (raw === DROPPED) continue;
+    const scaled = scaleLengths(raw, options.mmPerTemplateUnit) as Record<string, unknown>;
+    const features = Array.isArray(scaled.features) ? (scaled.features as Record<string, unknown>[]) : [];
+    const base = features[0];
+    const steps = base && base.kind === "turned" && Array.isArray(base.steps) ? (base.steps as Array<{ diameter: number }>) : undefined;
+    for (const f of features) fillThreadData(f, steps);
+
+    const parsed = resolvedVocabulary.part.safeParse(scaled);
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues.slice(0, 5)) {
+        issues.push({ partId: cp.id, code: "invalid", severity: "error", blocking: true, message: `Part "${cp.id}" ${formatPath(issue.path)}: ${issue.message}` });
+      }
+      blocked.add(cp.id);
+      continue;
+    }
+    const part = parsed.data;
+    if (!options.materialKeys.includes(part.material)) {
+      issues.push({ partId: part.id, code: "unknown-material", severity: "error", blocking: false, message: `${part.name}: "${part.material}" is not in the materials catalogue.` });
+    }
+    const guard = guardPart(part, options.fmt);
+    issues.push(...guard);
+    if (guard.some((g) => g.blocking)) blocked.add(part.id);
+    parts.push(part);
+  }
+  return { parts, issues, blocked: [...blocked] };
+}
