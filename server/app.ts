@@ -17,6 +17,8 @@ import { createSessionLayer } from "@server/modules/auth/session";
 import { authRouter } from "@server/modules/auth/router";
 import { adminService } from "@server/modules/admin/service";
 import { adminRouter } from "@server/modules/admin/router";
+import { machinesRouter, visesRouter } from "@server/modules/profiles/router";
+import { createDesignService, designsRouter, fixedCatalogue, sharedRouter, type TemplateCatalogue } from "@server/modules/designs";
 
 /**
  * Everything the app needs from outside, passed in (tests pass a test database and a silent logger).
@@ -29,6 +31,8 @@ export interface AppDeps {
   logger?: Logger;
   /** How long `/api/health` waits for the database before answering 503. */
   healthTimeoutMs?: number;
+  /** Which templates exist and their current versions, for saved designs (tests pass their own). */
+  templateCatalogue?: TemplateCatalogue;
 }
 
 /** JSON bodies above this are refused with 413. Routes taking uploads set their own limit. */
@@ -88,6 +92,11 @@ export function createApp(deps: AppDeps): express.Express {
 
   // --- feature routers ---
   // Mount each area's router here, one line each: app.use("/api/<area>", <area>Router(deps));
+  app.use("/api/vises", visesRouter(db.models));
+  app.use("/api/machines", machinesRouter(db.models));
+  const designs = createDesignService(db.models, deps.templateCatalogue ?? fixedCatalogue([]));
+  app.use("/api/designs", designsRouter(designs));
+  app.use("/api/shared", sharedRouter(designs));
   // --- end feature routers ---
 
   app.use("/api", notFoundHandler);
@@ -115,7 +124,8 @@ function mountClient(app: express.Express, clientDir: string, logger: Logger): v
   );
   app.use(express.static(clientDir, { index: false, maxAge: 0 }));
   app.get("/{*splat}", (req, res, next) => {
-    if (req.path.startsWith("/api/") || req.path === "/api") return next();
+    // /api is answered above; a path with a file extension is a missing file, not a client route.
+    if (req.path.startsWith("/api/") || req.path === "/api" || /\.[A-Za-z0-9]+$/.test(req.path)) return next();
     res.setHeader("Cache-Control", "no-cache");
     res.sendFile(indexHtml, (err) => {
       if (err) next(err);
