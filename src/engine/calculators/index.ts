@@ -7,6 +7,8 @@ import type { Calculator } from "./types";
 import { fitCalculator } from "./fit";
 import { generalToleranceCalculator } from "./general-tolerance";
 import { threadCalculator } from "./thread";
+import { reamCalculator } from "./ream";
+import { counterboreCalculator } from "./counterbore";
 import { eccentricCamCalculator } from "./eccentric-cam";
 import { beamCalculator } from "./beam";
 import { cuttingSpeedCalculator } from "./cutting-speed";
@@ -15,6 +17,8 @@ const all: Calculator[] = [
   fitCalculator,
   generalToleranceCalculator,
   threadCalculator,
+  reamCalculator,
+  counterboreCalculator,
   eccentricCamCalculator,
   beamCalculator,
   cuttingSpeedCalculator,
