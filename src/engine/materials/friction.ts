@@ -4,7 +4,8 @@
  * The handbook tables (Machinery's Handbook and Marks' Standard Handbook for Mechanical Engineers,
  * "coefficients of static friction", from memory) give clean laboratory surfaces; shop surfaces with oxide,
  * oil films and machining marks scatter widely. Each entry therefore carries a range and a `typical` design
- * figure inside it. For a self-locking check use the LOW end (less friction locks less); for a force
+ * figure we chose inside it (the range is the sourced part; the typical figure is our pick, not a handbook
+ * value). For a self-locking check use the LOW end (less friction locks less); for a force
  * estimate the typical figure. Lubricated means a greasy or oiled film, not hydrodynamic lubrication.
  */
 import { CalculatorInputError, type Source } from "../calculators/types";
@@ -14,7 +15,7 @@ import type { FrictionFamily, MaterialKey } from "./catalogue";
 export interface FrictionPair {
   families: readonly [FrictionFamily, FrictionFamily];
   lubricated: boolean;
-  /** Design figure inside the range. */
+  /** Our design figure, chosen inside the handbook range (not itself a handbook value). */
   typical: number;
   low: number;
   high: number;
