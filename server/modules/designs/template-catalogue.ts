@@ -1,0 +1,22 @@
+/**
+ * What saved designs need from the template catalogue: does a template exist, and which version is
+ * current. A port, so the designs area does not depend on how templates are stored; the app passes the
+ * real catalogue and tests pass one whose versions they control.
+ */
+export interface CatalogueEntry {
+  id: string;
+  /** The current published version (semantic version). */
+  version: string;
+  name: string;
+}
+
+export interface TemplateCatalogue {
+  /** The template as currently published, or null when the catalogue does not list it. */
+  current(templateId: string): Promise<CatalogueEntry | null>;
+}
+
+/** A catalogue over a fixed list (tests; and an install with no templates yet). */
+export function fixedCatalogue(entries: readonly CatalogueEntry[]): TemplateCatalogue {
+  const byId = new Map(entries.map((e) => [e.id, e]));
+  return { current: async (id) => byId.get(id) ?? null };
+}
