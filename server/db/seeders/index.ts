@@ -1,10 +1,10 @@
 import type { Database } from "../index";
 import type { MigrationModule } from "../migrator";
 import { demoAccountsSeeder } from "./0001-demo-accounts";
+import { demoWorkshopProfilesSeeder } from "./0010-demo-workshop-profiles";
 
 /**
  * Demo data, run once per database by `seedDemo()` (umzug, recorded in `seeder_runs`), so deleting a demo
- * account is not undone by the next start. Vises and machines come with the profiles issue, which makes
- * their tables; their demo rows belong there.
+ * account is not undone by the next start. The workshop's vises and machines (0010) go to its machinist.
  */
-export const seeders = (db: Database): MigrationModule[] => [demoAccountsSeeder(db)];
+export const seeders = (db: Database): MigrationModule[] => [demoAccountsSeeder(db), demoWorkshopProfilesSeeder(db)];
