@@ -1,5 +1,6 @@
 import { Page } from "@/components/layouts/page";
 import { Button } from "@/components/ui/button";
+import { cn } from "@/components/ui/cn";
 import { useCamCheck } from "../hooks/use-cam-check";
 import { CamChart } from "./cam-chart";
 import { CamFigures } from "./cam-figures";
@@ -16,13 +17,15 @@ import { Verdict } from "./verdict";
 /** The cam check: a circular eccentric cam's lock, force and curve, for anyone, no sign-in. */
 export function CamCheckPage() {
   const { form, fieldErrors, status, shown } = useCamCheck();
+  // The last good result stays on screen, a little faded, while the inputs do not match it.
+  const stale = status.kind === "input-problem" || status.kind === "server-problem";
   return (
     <Page
       title="Cam check"
       lead="Will a circular cam clamp hold by itself, and how hard does it press? Enter the cam, the lever and the friction; the figures follow as you type."
     >
       <div className="grid gap-8 lg:grid-cols-[minmax(20rem,26rem)_1fr]">
-        <section aria-labelledby="inputs-heading" className="space-y-5 lg:sticky lg:top-4 lg:self-start">
+        <section aria-labelledby="inputs-heading" className="space-y-5">
           <div className="flex flex-wrap items-center justify-between gap-3">
             <h2 id="inputs-heading" className="text-xl">
               Your cam
@@ -37,7 +40,7 @@ export function CamCheckPage() {
           </form>
         </section>
 
-        <section aria-labelledby="results-heading" className="min-w-0 space-y-6">
+        <section aria-labelledby="results-heading" className="min-w-0 space-y-6" data-testid="cam-results" data-status={status.kind}>
           <div className="flex flex-wrap items-center justify-between gap-3">
             <h2 id="results-heading" className="text-xl">
               Results
@@ -50,18 +53,20 @@ export function CamCheckPage() {
             <ResultStatus status={status} hasResult={Boolean(shown)} />
           ) : null}
           {shown ? (
-            <div className="space-y-6" aria-busy={status.kind === "updating"}>
+            <div
+              className={cn("space-y-6 transition-opacity", stale ? "opacity-70" : undefined)}
+              aria-busy={status.kind === "updating"}
+            >
               <div aria-live="polite">
-                <Verdict result={shown.result} />
+                <Verdict result={shown.result} system={form.system} />
               </div>
               <div className="grid gap-6 xl:grid-cols-[1fr_20rem]">
                 <CamFigures result={shown.result} system={form.system} />
                 <Cautions cautions={shown.result.cautions} />
               </div>
-              <div className="grid gap-6 xl:grid-cols-2">
-                <Explanation result={shown.result} />
+              <Explanation result={shown.result}>
                 <MomentBalance result={shown.result} system={form.system} />
-              </div>
+              </Explanation>
               <CamChart result={shown.result} system={form.system} gapMm={shown.input.gap} />
               <Suggestions suggestions={shown.result.suggestions} system={form.system} onTry={form.setBaseValue} />
               <Sources sources={shown.result.sources} zoneBasis={shown.result.workingZone.basis} />

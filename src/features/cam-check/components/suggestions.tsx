@@ -12,6 +12,14 @@ const titles: Record<CamSuggestion["parameter"], string> = {
   muContact: "If the face is oily",
 };
 
+/** The calculator's message opens with "label from → to:", which the card already shows. */
+function effectText(message: string): string {
+  const cut = message.indexOf(": ");
+  if (cut < 0 || !message.slice(0, cut).includes("→")) return message;
+  const rest = message.slice(cut + 2);
+  return rest.charAt(0).toUpperCase() + rest.slice(1);
+}
+
 const quantityOf = (p: CamSuggestion["parameter"]) => (p === "muContact" ? "coefficient" : "length");
 
 /** Each change the calculator worked through, with its effect, and a button that makes it. */
@@ -51,7 +59,7 @@ export function Suggestions({
               <p className="figure text-steel-900">
                 {formatQuantity(system, q, s.from)} → {formatQuantity(system, q, s.to)}
               </p>
-              <p className="text-sm text-steel-700">{s.message}</p>
+              <p className="text-sm text-steel-700">{effectText(s.message)}</p>
               {s.selfLockMargin !== null && s.parameter !== "muContact" ? (
                 <Button variant="secondary" className="mt-auto self-start" onClick={() => onTry(s.parameter, s.to)}>
                   Try this change

@@ -1,5 +1,6 @@
 import { cn } from "@/components/ui/cn";
 import type { CamResult } from "../api/cam-result-schema";
+import { formatQuantity, type UnitSystem } from "../model/units";
 
 const percent = (fraction: number) => `${fraction >= 0 ? "+" : "−"}${Math.abs(Math.round(fraction * 100))} %`;
 
@@ -36,7 +37,7 @@ const toneClasses: Record<Tone, string> = {
 
 const icons: Record<Tone, string> = { holds: "✔", caution: "!", fault: "✖" };
 
-export function Verdict({ result }: { result: CamResult }) {
+export function Verdict({ result, system }: { result: CamResult; system: UnitSystem }) {
   const v = lockVerdict(result);
   return (
     <div className={cn("rounded-lg border-2 p-4", toneClasses[v.tone])} data-testid="lock-verdict" data-tone={v.tone}>
@@ -51,6 +52,12 @@ export function Verdict({ result }: { result: CamResult }) {
             Self-locking margin: {percent(result.selfLockMargin)} where it engages, {percent(result.selfLockMarginOverZone)} at
             the weakest point of the working zone
           </p>
+          {v.tone === "holds" ? null : (
+            <p className="mt-2 font-semibold text-steel-900">
+              With everything else as entered, it locks over the whole working zone with an eccentricity of at most{" "}
+              <span className="figure">{formatQuantity(system, "length", result.maxSelfLockingEccentricityMm)}</span>.
+            </p>
+          )}
         </div>
       </div>
     </div>
