@@ -4,6 +4,7 @@ import { createDatabase, type Database } from "@server/db";
 import { migrateDown, migrateUp, migrationTable, schemaMigrator, seedDemo } from "@server/db/migrate";
 import { migrations } from "@server/db/migrations";
 import { demoAccounts } from "@server/db/seeders/demo-accounts";
+import { seeders } from "@server/db/seeders";
 import { prepareTestDatabase, testDbConfig } from "./helpers";
 
 // A database of its own: migrating down drops every table, which the shared test database cannot allow.
@@ -50,8 +51,10 @@ describe("migrations", () => {
     await expect(db.models.User.create(row)).rejects.toBeInstanceOf(UniqueConstraintError);
   });
 
-  it("seed the demo accounts once, one per role, and not again", async () => {
-    expect(await seedDemo(db)).toEqual(["0001-demo-accounts"]);
+  it("seed the demo data once (the accounts: one per role), and not again", async () => {
+    const all = seeders(db).map((m) => m.name);
+    expect(all).toContain("0001-demo-accounts");
+    expect(await seedDemo(db)).toEqual(all);
     const users = await db.models.User.findAll({ where: { email: demoAccounts.map((a) => a.email) } });
     expect(users.map((u) => u.role).sort()).toEqual(["admin", "designer", "machinist", "reviewer"]);
     expect(await seedDemo(db)).toEqual([]);
