@@ -1,5 +1,6 @@
 import { Link, useLocation } from "react-router";
 import { buttonClasses } from "@/components/ui/button";
+import { LogoMark } from "@/components/layouts/logo-mark";
 import { Page } from "@/components/layouts/page";
 import { paths } from "@/lib/paths";
 
@@ -19,6 +20,7 @@ export function NotFound() {
           Open the cam check
         </Link>
       </div>
+      <LogoMark className="mt-12 size-40 text-steel-200" />
     </Page>
   );
 }

@@ -14,8 +14,7 @@ export function LogoMark({ className, title }: { className?: string; title?: str
       <path d="M3 3h8.5v25.5H37V37H3z" fill="currentColor" />
       <path d="M26 15 36 4.5" stroke="currentColor" strokeWidth="3.2" strokeLinecap="round" />
       <circle cx="25" cy="16" r="10" fill="var(--color-spark-500)" />
-      <circle cx="22.2" cy="18.4" r="3.4" fill="var(--color-steel-900)" />
-      <circle cx="25" cy="16" r="1.3" fill="var(--color-steel-900)" />
+      <circle cx="22" cy="18.6" r="3.2" fill="var(--color-steel-900)" />
     </svg>
   );
 }
