@@ -4,6 +4,7 @@ import { SiteHeader, type NavItem } from "@/components/layouts/site-header";
 import { AccountMenu } from "@/features/auth/components/account-menu";
 import { useMe } from "@/features/auth/api/get-me";
 import { paths } from "@/lib/paths";
+import { templatesPath } from "@/features/catalogue/paths";
 
 /** The app shell: header with navigation and account, the page, the footer with the safety note. */
 export function RootLayout() {
@@ -11,6 +12,7 @@ export function RootLayout() {
   const navigation = useNavigation();
   const nav: NavItem[] = [
     { to: paths.home, label: "Home" },
+    { to: templatesPath, label: "Templates" },
     { to: paths.camCheck, label: "Cam check" },
   ];
   if (me.data?.role === "admin") nav.push({ to: paths.admin, label: "Accounts" });

@@ -1,5 +1,6 @@
 import { createBrowserRouter, type RouteObject } from "react-router";
 import { paths } from "@/lib/paths";
+import { configuratorRoute, templatesPath } from "@/features/catalogue/paths";
 import { AppCrash } from "./app-crash";
 import { LoadingScreen } from "./loading-screen";
 import { RootLayout } from "./root-layout";
@@ -23,6 +24,8 @@ export const routes: RouteObject[] = [
           { path: paths.register, lazy: () => import("./routes/register") },
           { path: paths.admin, lazy: () => import("./routes/admin") },
           { path: paths.camCheck, lazy: () => import("./routes/cam-check") },
+          { path: templatesPath, lazy: () => import("./routes/templates") },
+          { path: configuratorRoute, lazy: () => import("./routes/configurator") },
           { path: "*", lazy: () => import("./routes/not-found") },
         ],
       },

@@ -1,0 +1,183 @@
+import { useCallback, useEffect, useMemo, type ReactNode } from "react";
+import { Link, useLocation } from "react-router";
+import { buttonClasses } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import { Spinner } from "@/components/ui/spinner";
+import type { ParameterValue } from "@/engine/parameters";
+import type { LengthUnit } from "@/engine/units";
+import { ApiError } from "@/lib/api-error";
+import { useTemplateDetail, type TemplateDetail } from "../api/template-detail";
+import { useConfiguration } from "../hooks/use-configuration";
+import { useLiveEvaluation } from "../hooks/use-live-evaluation";
+import { AnalysisPanel } from "./analysis-panel";
+import { ChecksPanel } from "./checks-panel";
+import { DownloadsPanel } from "./downloads-panel";
+import { EvaluationStatusLine } from "./evaluation-status";
+import { fieldId } from "./parameter-field";
+import { ParameterForm } from "./parameter-form";
+import { PartsList } from "./parts-list";
+import { ResultsPlaceholder } from "./results-placeholder";
+import { SaveDesignForm } from "./save-design-form";
+import { UnitSwitch } from "./unit-switch";
+import { ViseFill } from "./vise-fill";
+
+/** What the page hands the 3D preview (composed in by the route, so the viewer's code loads on its own). */
+export interface ViewerSlotProps {
+  templateId: string;
+  /** The settled configuration in the user's units; null until the form first holds valid values. */
+  request: { parameters: Record<string, ParameterValue>; units: LengthUnit } | null;
+}
+
+export interface ConfiguratorPageProps {
+  templateId: string;
+  signedIn: boolean;
+  renderViewer: (props: ViewerSlotProps) => ReactNode;
+  links: { catalogue: string; signIn: string; vises: string };
+}
+
+/** The configurator for one template: loads it, then shows the form beside the preview and the results. */
+export function ConfiguratorPage(props: ConfiguratorPageProps) {
+  const detail = useTemplateDetail(props.templateId);
+  useEffect(() => {
+    if (detail.data) document.title = `${detail.data.name} · Jigwright`;
+  }, [detail.data]);
+
+  if (detail.isPending) {
+    return (
+      <div className="mx-auto max-w-7xl px-4 py-10">
+        <Spinner label="Loading the template" />
+      </div>
+    );
+  }
+  if (detail.isError) {
+    const notFound = detail.error instanceof ApiError && detail.error.status === 404;
+    return (
+      <div className="mx-auto max-w-3xl px-4 py-10">
+        <h1 className="text-3xl">{notFound ? "No such template" : "The template could not be loaded"}</h1>
+        <Notice tone={notFound ? "info" : "fault"} className="mt-4">
+          {notFound ? `There is no published template “${props.templateId}”. It may have been retired or the link mistyped.` : detail.error.message}
+        </Notice>
+        <div className="mt-6 flex flex-wrap gap-3">
+          {!notFound ? (
+            <button type="button" className={buttonClasses("primary")} onClick={() => void detail.refetch()}>
+              Try again
+            </button>
+          ) : null}
+          <Link to={props.links.catalogue} className={buttonClasses("secondary")}>
+            Back to the templates
+          </Link>
+        </div>
+      </div>
+    );
+  }
+  return <Configurator {...props} template={detail.data} />;
+}
+
+function Configurator({ template, signedIn, renderViewer, links }: ConfiguratorPageProps & { template: TemplateDetail }) {
+  const config = useConfiguration(template);
+  const { specs, units, form } = config;
+  const location = useLocation();
+  const live = useLiveEvaluation(template.id, config.userParameters, units, config.showServerProblems);
+  const evaluation = live.shown?.evaluation ?? null;
+  const shownUnits = evaluation?.units ?? units;
+
+  const labels = useMemo(() => new Map(specs.map((s) => [s.key, s.label])), [specs]);
+  const labelOf = useCallback((key: string) => labels.get(key), [labels]);
+  const focusField = useCallback(
+    (key: string) => {
+      const el = document.getElementById(fieldId(key));
+      el?.scrollIntoView({ block: "center", behavior: "smooth" });
+      form.setFocus(key);
+    },
+    [form],
+  );
+  const analysisLabels = useMemo(
+    () => Object.fromEntries((template.analyses ?? []).filter((a) => a.label).map((a) => [a.id, a.label!])),
+    [template.analyses],
+  );
+  const hand = evaluation?.parameters.handForce;
+  const failingErrors = (evaluation?.checks ?? []).filter((c) => c.severity === "error" && !c.passed).map((c) => c.message);
+  const signInHref = `${links.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`;
+
+  return (
+    <div className="mx-auto max-w-7xl px-4 py-6">
+      <nav aria-label="Breadcrumb" className="text-sm text-steel-600">
+        <Link to={links.catalogue} className="font-semibold text-spark-700 underline">
+          Templates
+        </Link>
+        <span aria-hidden="true"> / </span>
+        <span>{template.name}</span>
+      </nav>
+      <div className="mt-2 flex flex-wrap items-end justify-between gap-4">
+        <div className="max-w-3xl">
+          <h1 className="text-3xl sm:text-4xl">{template.name}</h1>
+          <p className="mt-1 text-steel-700">{template.summary}</p>
+          <p className="figure mt-1 text-sm text-steel-600">
+            {template.family} · version {template.version}
+          </p>
+        </div>
+        <UnitSwitch value={units} onChange={config.switchUnits} />
+      </div>
+
+      <div className="mt-6 grid items-start gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+        <div className="space-y-4">
+          {signedIn ? (
+            <ViseFill parameterKeys={new Set(specs.map((s) => s.key))} labelOf={labelOf} onFill={config.fillFromMm} visesHref={links.vises} />
+          ) : (
+            <p className="rounded-lg border border-steel-200 bg-white p-3 text-sm text-steel-700">
+              <Link to={signInHref} className="font-semibold text-spark-700 underline">
+                Sign in
+              </Link>{" "}
+              to fill the jaw sizes from a vise you have recorded, save the design and download drawings.
+            </p>
+          )}
+          <ParameterForm
+            specs={specs}
+            form={form}
+            templateUnits={template.units}
+            units={units}
+            {...(template.materialNames ? { materialNames: template.materialNames } : {})}
+          />
+        </div>
+
+        <div className="space-y-4">
+          <EvaluationStatusLine status={live.status} />
+          {renderViewer({ templateId: template.id, request: live.settled })}
+          {evaluation ? (
+            <>
+              <ChecksPanel checks={evaluation.checks} labelOf={labelOf} onFocusField={focusField} />
+              <AnalysisPanel
+                analyses={evaluation.analyses}
+                labels={analysisLabels}
+                units={shownUnits}
+                {...(typeof hand === "number" ? { handForceN: hand } : {})}
+              />
+              <PartsList parts={evaluation.partSummaries} units={shownUnits} />
+              {evaluation.cautions.length > 0 ? (
+                <p className="text-sm text-steel-700">
+                  <strong className="text-steel-900">Safety: </strong>
+                  {evaluation.cautions.join(" ")}
+                </p>
+              ) : null}
+            </>
+          ) : (
+            <ResultsPlaceholder failed={live.status.kind === "server-problem" ? live.status.message : null} />
+          )}
+          <div className="grid gap-4 xl:grid-cols-2">
+            {signedIn ? (
+              <SaveDesignForm templateId={template.id} templateName={template.name} parameters={config.templateParameters} units={units} />
+            ) : null}
+            <DownloadsPanel
+              templateId={template.id}
+              parameters={config.userParameters}
+              units={units}
+              signedIn={signedIn}
+              failingErrors={failingErrors}
+              signInHref={signInHref}
+            />
+          </div>
+        </div>
+      </div>
+    </div>
+  );
+}
