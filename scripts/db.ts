@@ -31,7 +31,14 @@ function settingsFor(name: string, port: number | undefined): DbConfig {
     return { ...t, port: port ?? t.port, poolMax: 5 };
   }
   const inst = instance(name, port ? { port } : {});
-  return { host: "127.0.0.1", port: inst.port, database: `jigwright_${name.replace(/-/g, "_")}`, user: "jigwright", password: "jigwright-local-only", poolMax: 5 };
+  return {
+    host: "127.0.0.1",
+    port: inst.port,
+    database: `jigwright_${name.replace(/-/g, "_")}`,
+    user: "jigwright",
+    password: "jigwright-local-only",
+    poolMax: 5,
+  };
 }
 
 async function main(argv: string[]): Promise<number> {
@@ -60,7 +67,9 @@ async function main(argv: string[]): Promise<number> {
     case "start": {
       const r = await startInstance(inst, log);
       await ensureDatabase(inst, settings);
-      log(`MariaDB "${name}" ${r.started ? "started" : "already running"}: 127.0.0.1:${inst.port}, database ${settings.database}.`);
+      log(
+        `MariaDB "${name}" ${r.started ? "started" : "already running"}: 127.0.0.1:${inst.port}, database ${settings.database}.`,
+      );
       return 0;
     }
     case "stop": {
@@ -76,8 +85,16 @@ async function main(argv: string[]): Promise<number> {
     case "migrate":
     case "reset": {
       const seed = name === "app" && loadConfig().seedDemo;
-      await prepareDatabase(settings, { managed: true, instanceName: name, seed, fresh: command === "reset", log });
-      log(`Database ${settings.database} on 127.0.0.1:${inst.port} is ${command === "reset" ? "fresh and " : ""}migrated.`);
+      await prepareDatabase(settings, {
+        managed: true,
+        instanceName: name,
+        seed,
+        fresh: command === "reset",
+        log,
+      });
+      log(
+        `Database ${settings.database} on 127.0.0.1:${inst.port} is ${command === "reset" ? "fresh and " : ""}migrated.`,
+      );
       return 0;
     }
     default:

@@ -23,13 +23,19 @@ async function main(): Promise<number> {
     log,
   });
   log("Client with hot reload: http://127.0.0.1:5173  (API on http://127.0.0.1:" + apiPort + ")");
-  if (config.seedDemo) log(`Demo accounts (demo only): ${demoAccounts.map((a) => `${a.email} / ${a.password}`).join(", ")}`);
+  if (config.seedDemo)
+    log(`Demo accounts (demo only): ${demoAccounts.map((a) => `${a.email} / ${a.password}`).join(", ")}`);
 
   const env = { ...process.env, PORT: apiPort, SERVE_CLIENT: "false" };
   const { result } = concurrently(
     [
       { name: "api", command: "tsx watch --clear-screen=false server/index.ts", env, prefixColor: "blue" },
-      { name: "web", command: `vite --port 5173 --strictPort`, env: { ...process.env, API_PORT: apiPort }, prefixColor: "green" },
+      {
+        name: "web",
+        command: `vite --port 5173 --strictPort`,
+        env: { ...process.env, API_PORT: apiPort },
+        prefixColor: "green",
+      },
     ],
     { killOthersOn: ["failure", "success"], prefix: "name" },
   );

@@ -58,7 +58,8 @@ export function ensureMariadbInstalled(log: Log = quiet): { mariadbd: string; in
     mariadbd = findProgram("mariadbd");
     installDb = findProgram("mariadb-install-db");
   }
-  if (!mariadbd || !installDb) throw new Error("mariadb-server is installed but mariadbd or mariadb-install-db is missing.");
+  if (!mariadbd || !installDb)
+    throw new Error("mariadb-server is installed but mariadbd or mariadb-install-db is missing.");
   return { mariadbd, installDb };
 }
 
@@ -83,7 +84,9 @@ export function renderMyCnf(inst: Instance): string {
     "performance_schema=OFF",
     "innodb_buffer_pool_size=64M",
     "max_connections=200",
-    ...(inst.ephemeral ? ["# Test data: no fsync per commit.", "innodb_flush_log_at_trx_commit=2", "sync_binlog=0"] : []),
+    ...(inst.ephemeral
+      ? ["# Test data: no fsync per commit.", "innodb_flush_log_at_trx_commit=2", "sync_binlog=0"]
+      : []),
     "",
     "[client]",
     `socket=${inst.socket}`,
@@ -223,13 +226,18 @@ function tail(file: string, lines = 20): string {
  * first use (about 1 s), removes a stale pid file or socket left by a crash, starts mariadbd in its own
  * session with stdin closed, and waits until it answers. Returns whether this call started it.
  */
-export async function startInstance(inst: Instance, log: Log = quiet): Promise<{ started: boolean; pid: number }> {
+export async function startInstance(
+  inst: Instance,
+  log: Log = quiet,
+): Promise<{ started: boolean; pid: number }> {
   const programs = ensureMariadbInstalled(log);
   return withLock(inst, async () => {
     const existing = readPid(inst);
     if (existing !== undefined && isOurMariadbd(existing, inst)) {
       if (await waitUntilAnswering(inst, existing, 30_000)) return { started: false, pid: existing };
-      throw new Error(`MariaDB "${inst.name}" (pid ${existing}) is running but does not answer.\n${tail(inst.logFile)}`);
+      throw new Error(
+        `MariaDB "${inst.name}" (pid ${existing}) is running but does not answer.\n${tail(inst.logFile)}`,
+      );
     }
     // Nothing of ours runs: whatever pid file or socket is there is stale.
     fs.rmSync(inst.pidFile, { force: true });
@@ -241,7 +249,9 @@ export async function startInstance(inst: Instance, log: Log = quiet): Promise<{
       // Missing or half-made by an interrupted first run: start it afresh.
       fs.rmSync(inst.dataDir, { recursive: true, force: true });
       fs.mkdirSync(inst.dataDir, { recursive: true });
-      log(`Initialising MariaDB data directory ${path.relative(process.cwd(), inst.dataDir) || inst.dataDir}…`);
+      log(
+        `Initialising MariaDB data directory ${path.relative(process.cwd(), inst.dataDir) || inst.dataDir}…`,
+      );
       const r = spawnSync(
         programs.installDb,
         [`--defaults-file=${inst.cnfFile}`, "--auth-root-authentication-method=normal", "--skip-test-db"],
@@ -269,7 +279,9 @@ export async function startInstance(inst: Instance, log: Log = quiet): Promise<{
     const deadline = Date.now() + 60_000;
     while (Date.now() < deadline) {
       if (exited !== undefined) {
-        throw new Error(`mariadbd "${inst.name}" exited (code ${exited}) while starting.\n${tail(inst.logFile)}`);
+        throw new Error(
+          `mariadbd "${inst.name}" exited (code ${exited}) while starting.\n${tail(inst.logFile)}`,
+        );
       }
       if (await ping(inst)) {
         log(`MariaDB "${inst.name}" answering on 127.0.0.1:${inst.port} (pid ${pid}).`);
@@ -323,7 +335,9 @@ export async function ensureDatabase(inst: Instance, db: Omit<DbSettings, "host"
   const conn = await rootConnection(inst);
   try {
     const name = conn.escapeId(db.database);
-    await conn.query(`CREATE DATABASE IF NOT EXISTS ${name} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+    await conn.query(
+      `CREATE DATABASE IF NOT EXISTS ${name} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+    );
     for (const host of ["127.0.0.1", "localhost", "::1"]) {
       const account = `${conn.escape(db.user)}@${conn.escape(host)}`;
       await conn.query(`CREATE USER IF NOT EXISTS ${account} IDENTIFIED BY ${conn.escape(db.password)}`);

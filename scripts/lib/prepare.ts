@@ -26,7 +26,9 @@ export async function prepareDatabase(
   let startedInstance = false;
   if (options.managed) {
     if (db.host !== "127.0.0.1" && db.host !== "localhost") {
-      throw new Error(`DB_HOST is ${db.host}: a managed MariaDB only runs on loopback. Set DB_MANAGED=false for your own server.`);
+      throw new Error(
+        `DB_HOST is ${db.host}: a managed MariaDB only runs on loopback. Set DB_MANAGED=false for your own server.`,
+      );
     }
     inst = instance(options.instanceName, { port: db.port });
     startedInstance = (await startInstance(inst, log)).started;

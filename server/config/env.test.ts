@@ -4,7 +4,13 @@ import { ConfigError, parseEnv } from "./env";
 describe("parseEnv", () => {
   it("gives the documented defaults", () => {
     const e = parseEnv({});
-    expect(e).toMatchObject({ NODE_ENV: "development", HOST: "127.0.0.1", PORT: 3000, DB_PORT: 3406, DB_NAME: "jigwright" });
+    expect(e).toMatchObject({
+      NODE_ENV: "development",
+      HOST: "127.0.0.1",
+      PORT: 3000,
+      DB_PORT: 3406,
+      DB_NAME: "jigwright",
+    });
     expect(e.DB_MANAGED).toBe(true);
   });
 

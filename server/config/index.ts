@@ -57,7 +57,10 @@ function parseTrustProxy(raw: string): boolean | number | string {
  * Reads and validates the environment. `overrides` win over `env` (tests use them to point at the
  * test database). May create `.data/session-secret` when SESSION_SECRET is unset.
  */
-export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<AppConfig> = {}): AppConfig {
+export function loadConfig(
+  env: NodeJS.ProcessEnv = process.env,
+  overrides: Partial<AppConfig> = {},
+): AppConfig {
   const e = parseEnv(env);
   const dataDir = path.join(projectRoot, ".data");
   const config: AppConfig = {

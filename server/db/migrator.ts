@@ -36,8 +36,11 @@ export async function withMigrationLock<T>(db: Database, fn: () => Promise<T>): 
   const conn = await mariadb.createConnection({ host, port, user, password, database, connectTimeout: 5000 });
   const lockName = `jigwright_migrate_${database}`;
   try {
-    const rows = (await conn.query("SELECT GET_LOCK(?, 120) AS got", [lockName])) as Array<{ got: number | bigint | null }>;
-    if (Number(rows[0]?.got) !== 1) throw new Error(`Could not take the migration lock of ${database} within 120 s.`);
+    const rows = (await conn.query("SELECT GET_LOCK(?, 120) AS got", [lockName])) as Array<{
+      got: number | bigint | null;
+    }>;
+    if (Number(rows[0]?.got) !== 1)
+      throw new Error(`Could not take the migration lock of ${database} within 120 s.`);
     try {
       return await fn();
     } finally {

@@ -24,6 +24,7 @@ export const badRequest = (message: string, details: ErrorDetail[] = []) =>
 export const unauthenticated = (message = "Sign in to do this.") => new HttpError("unauthenticated", message);
 export const forbidden = (message = "Your role does not allow this.") => new HttpError("forbidden", message);
 export const notFound = (message = "Not found.") => new HttpError("not_found", message);
-export const conflict = (message: string, details: ErrorDetail[] = []) => new HttpError("conflict", message, details);
+export const conflict = (message: string, details: ErrorDetail[] = []) =>
+  new HttpError("conflict", message, details);
 export const serviceUnavailable = (message = "The database is unreachable; try again shortly.") =>
   new HttpError("service_unavailable", message);

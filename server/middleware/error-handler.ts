@@ -17,7 +17,9 @@ function isDatabaseDown(err: unknown): boolean {
   if (err instanceof ConnectionError || err instanceof ConnectionAcquireTimeoutError) return true;
   if (err instanceof SequelizeBaseError) {
     const code = (err as { original?: { code?: string } }).original?.code;
-    return code === "ECONNREFUSED" || code === "ER_CONNECTION_TIMEOUT" || code === "ER_SOCKET_UNEXPECTED_CLOSE";
+    return (
+      code === "ECONNREFUSED" || code === "ER_CONNECTION_TIMEOUT" || code === "ER_SOCKET_UNEXPECTED_CLOSE"
+    );
   }
   return false;
 }
@@ -51,7 +53,10 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       payload = body("payload_too_large", "The request body is too large.");
     } else if (parserType === "encoding.unsupported" || parserType === "charset.unsupported") {
       status = 415;
-      payload = body("unsupported_media_type", "The request body uses an encoding the server does not accept.");
+      payload = body(
+        "unsupported_media_type",
+        "The request body uses an encoding the server does not accept.",
+      );
     } else if (err instanceof ZodError) {
       status = 400;
       payload = body("validation_error", "Some fields are not valid.", zodDetails(err));

@@ -12,6 +12,10 @@ describe("zodDetails", () => {
 
   it("prefixes params and query paths", () => {
     const r = registerBodySchema.safeParse({});
-    expect(zodDetails(r.error!, "params").map((d) => d.path)).toEqual(["params.email", "params.password", "params.displayName"]);
+    expect(zodDetails(r.error!, "params").map((d) => d.path)).toEqual([
+      "params.email",
+      "params.password",
+      "params.displayName",
+    ]);
   });
 });

@@ -53,7 +53,10 @@ export type RegisterBody = z.infer<typeof registerBodySchema>;
 /** `POST /api/auth/login`. The password is not length-checked here: old accounts may predate the rule. */
 export const loginBodySchema = z.object({
   email: emailSchema,
-  password: z.string({ error: "Password is required." }).min(1, { error: "Password is required." }).max(passwordMaxLength),
+  password: z
+    .string({ error: "Password is required." })
+    .min(1, { error: "Password is required." })
+    .max(passwordMaxLength),
 });
 export type LoginBody = z.infer<typeof loginBodySchema>;
 

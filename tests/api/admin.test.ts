@@ -33,7 +33,9 @@ describe("every role against every admin route", () => {
       expect(list.users.length).toBeGreaterThan(0);
       expect(JSON.stringify(res.body)).not.toMatch(/password/i);
     } else {
-      expect(apiErrorBodySchema.parse(res.body).error.code).toBe(caller === "guest" ? "unauthenticated" : "forbidden");
+      expect(apiErrorBodySchema.parse(res.body).error.code).toBe(
+        caller === "guest" ? "unauthenticated" : "forbidden",
+      );
     }
   });
 

@@ -21,7 +21,11 @@ function sessionCookie(res: { headers: Record<string, unknown> }): string | unde
 describe("POST /api/auth/register", () => {
   it("refuses a bad e-mail, a short password and a missing name, one detail per field", async () => {
     const agent = new TestAgent(t.app);
-    const res = await agent.post("/api/auth/register", { email: "not-an-address", password: "short", displayName: "  " });
+    const res = await agent.post("/api/auth/register", {
+      email: "not-an-address",
+      password: "short",
+      displayName: "  ",
+    });
     expect(res.status).toBe(400);
     const body = apiErrorBodySchema.parse(res.body);
     expect(body.error.code).toBe("validation_error");
@@ -31,16 +35,27 @@ describe("POST /api/auth/register", () => {
 
   it("accepts exactly 10 characters and refuses 9 (our rule: passwords of at least 10)", async () => {
     const agent = new TestAgent(t.app);
-    const nine = await agent.post("/api/auth/register", { email: uniqueEmail(), password: "123456789", displayName: "N" });
+    const nine = await agent.post("/api/auth/register", {
+      email: uniqueEmail(),
+      password: "123456789",
+      displayName: "N",
+    });
     expect(nine.status).toBe(400);
-    const ten = await agent.post("/api/auth/register", { email: uniqueEmail(), password: "1234567890", displayName: "N" });
+    const ten = await agent.post("/api/auth/register", {
+      email: uniqueEmail(),
+      password: "1234567890",
+      displayName: "N",
+    });
     expect(ten.status).toBe(201);
   });
 
   it("creates a machinist, signs them in, and normalises the e-mail", async () => {
     const agent = new TestAgent(t.app);
     const email = uniqueEmail("Mixed");
-    const { res } = await agent.register({ email: `  ${email.toUpperCase()} `, displayName: "  Lathe Hand  " });
+    const { res } = await agent.register({
+      email: `  ${email.toUpperCase()} `,
+      displayName: "  Lathe Hand  ",
+    });
     expect(res.status).toBe(201);
     const user = publicUserSchema.parse((res.body as { user: unknown }).user);
     expect(user).toMatchObject({ email: email.toLowerCase(), displayName: "Lathe Hand", role: "machinist" });
@@ -84,7 +99,10 @@ describe("sessions", () => {
   it("marks the cookie Secure when a trusted proxy says the request came over HTTPS", async () => {
     const behindProxy = await createTestApp({ config: { trustProxy: "loopback" } });
     try {
-      const res = await supertest(behindProxy.app).get("/api/auth/csrf").set("X-Forwarded-Proto", "https").expect(200);
+      const res = await supertest(behindProxy.app)
+        .get("/api/auth/csrf")
+        .set("X-Forwarded-Proto", "https")
+        .expect(200);
       expect(sessionCookie(res)).toMatch(/;\s*Secure/i);
     } finally {
       await behindProxy.close();
@@ -152,7 +170,12 @@ describe("POST /api/auth/login", () => {
   it("validates the body", async () => {
     const res = await new TestAgent(t.app).post("/api/auth/login", { email: "x" });
     expect(res.status).toBe(400);
-    expect(apiErrorBodySchema.parse(res.body).error.details.map((d) => d.path).sort()).toEqual(["email", "password"]);
+    expect(
+      apiErrorBodySchema
+        .parse(res.body)
+        .error.details.map((d) => d.path)
+        .sort(),
+    ).toEqual(["email", "password"]);
   });
 });
 

@@ -9,22 +9,26 @@ import { createTestApp, TestAgent, uniqueEmail, type TestApp } from "./helpers";
 /** Runs `npm run -s cli -- …` the way an operator would, pointed at the test database by DB_* variables. */
 function cli(t: TestApp, args: string[], env: Record<string, string> = {}) {
   const { host, port, database, user, password } = t.config.db;
-  const r = spawnSync(path.join(projectRoot, "node_modules", ".bin", "tsx"), ["server/cli/index.ts", ...args], {
-    cwd: projectRoot,
-    encoding: "utf8",
-    stdio: ["ignore", "pipe", "pipe"],
-    env: {
-      ...process.env,
-      NODE_ENV: "test",
-      DB_HOST: host,
-      DB_PORT: String(port),
-      DB_NAME: database,
-      DB_USER: user,
-      DB_PASSWORD: password,
-      JIGWRIGHT_PASSWORD: "",
-      ...env,
+  const r = spawnSync(
+    path.join(projectRoot, "node_modules", ".bin", "tsx"),
+    ["server/cli/index.ts", ...args],
+    {
+      cwd: projectRoot,
+      encoding: "utf8",
+      stdio: ["ignore", "pipe", "pipe"],
+      env: {
+        ...process.env,
+        NODE_ENV: "test",
+        DB_HOST: host,
+        DB_PORT: String(port),
+        DB_NAME: database,
+        DB_USER: user,
+        DB_PASSWORD: password,
+        JIGWRIGHT_PASSWORD: "",
+        ...env,
+      },
     },
-  });
+  );
   return { code: r.status, stderr: r.stderr };
 }
 
@@ -54,7 +58,13 @@ let t: TestApp;
 beforeAll(async () => {
   t = await createTestApp();
   const { host, port, database, user, password } = t.config.db;
-  Object.assign(process.env, { DB_HOST: host, DB_PORT: String(port), DB_NAME: database, DB_USER: user, DB_PASSWORD: password });
+  Object.assign(process.env, {
+    DB_HOST: host,
+    DB_PORT: String(port),
+    DB_NAME: database,
+    DB_USER: user,
+    DB_PASSWORD: password,
+  });
 });
 afterAll(async () => {
   await t.close();
@@ -96,15 +106,22 @@ describe("npm run -s cli -- user", () => {
     const badRole = await cliInProcess(["set-role", "--email", "x@api.test", "--role", "boss"]);
     expect(badRole.code).toBe(2);
     expect(badRole.stderr).toContain("Role must be one of");
-    const shortPassword = await cliInProcess(["create", "--email", uniqueEmail(), "--role", "machinist"], "short");
+    const shortPassword = await cliInProcess(
+      ["create", "--email", uniqueEmail(), "--role", "machinist"],
+      "short",
+    );
     expect(shortPassword.code).toBe(2);
     expect(shortPassword.stderr).toContain("at least 10");
     // No JIGWRIGHT_PASSWORD and no terminal to ask on.
     const wasTTY = process.stdin.isTTY;
     Object.defineProperty(process.stdin, "isTTY", { value: false, configurable: true });
-    const noTerminal = await cliInProcess(["create", "--email", uniqueEmail(), "--role", "machinist"]).finally(() =>
-      Object.defineProperty(process.stdin, "isTTY", { value: wasTTY, configurable: true }),
-    );
+    const noTerminal = await cliInProcess([
+      "create",
+      "--email",
+      uniqueEmail(),
+      "--role",
+      "machinist",
+    ]).finally(() => Object.defineProperty(process.stdin, "isTTY", { value: wasTTY, configurable: true }));
     expect(noTerminal.code).toBe(2);
     expect(noTerminal.stderr).toContain("JIGWRIGHT_PASSWORD");
   });

@@ -26,7 +26,10 @@ let sessionCookie = "";
 beforeAll(async () => {
   await startInstance(fault);
   await ensureDatabase(fault, dbConfig);
-  const config = loadConfig({ NODE_ENV: "test" }, { logLevel: "silent", db: dbConfig, sessionSecret: "f".repeat(32) });
+  const config = loadConfig(
+    { NODE_ENV: "test" },
+    { logLevel: "silent", db: dbConfig, sessionSecret: "f".repeat(32) },
+  );
   db = createDatabase(config.db);
   app = createApp({ config, db });
 });

@@ -5,7 +5,11 @@ describe("MariaDB instance layout", () => {
   it("keeps each instance's files under .data/mariadb-<name> with its own port", () => {
     const app = instance("app", { root: "/srv/jw" });
     const test = instance("test", { root: "/srv/jw" });
-    expect(app).toMatchObject({ port: 3406, dataDir: "/srv/jw/.data/mariadb-app/data", socket: "/srv/jw/.data/mariadb-app/mariadbd.sock" });
+    expect(app).toMatchObject({
+      port: 3406,
+      dataDir: "/srv/jw/.data/mariadb-app/data",
+      socket: "/srv/jw/.data/mariadb-app/mariadbd.sock",
+    });
     expect(test.port).toBe(3407);
     expect(instance("fault").port).toBe(3408);
   });

@@ -31,7 +31,9 @@ describe("migrations", () => {
   it("are all applied by prepare, and none is pending", async () => {
     expect((await schemaMigrator(db).pending()).map((m) => m.name)).toEqual([]);
     expect((await schemaMigrator(db).executed()).map((m) => m.name)).toEqual(migrations.map((m) => m.name));
-    expect(await tables()).toEqual(expect.arrayContaining(["users", "sessions", "user_tokens", migrationTable]));
+    expect(await tables()).toEqual(
+      expect.arrayContaining(["users", "sessions", "user_tokens", migrationTable]),
+    );
   });
 
   it("go all the way down (leaving only the bookkeeping table) and back up", async () => {

@@ -31,7 +31,8 @@ describe("sign-in rate limit per account", () => {
   it("does not count successful sign-ins", async () => {
     const email = uniqueEmail("regular");
     await new TestAgent(t.app).register({ email });
-    for (let i = 0; i < 5; i++) expect((await new TestAgent(t.app).login(email, testPassword)).status).toBe(200);
+    for (let i = 0; i < 5; i++)
+      expect((await new TestAgent(t.app).login(email, testPassword)).status).toBe(200);
   });
 });
 
@@ -46,7 +47,8 @@ describe("sign-in rate limit per address", () => {
 
   it("blocks an address after 4 sign-in or register requests, whichever accounts they name", async () => {
     const agent = new TestAgent(t.app);
-    for (let i = 0; i < 4; i++) expect((await agent.login(uniqueEmail(`spray${i}`), "whatever password")).status).toBe(401);
+    for (let i = 0; i < 4; i++)
+      expect((await agent.login(uniqueEmail(`spray${i}`), "whatever password")).status).toBe(401);
     const res = await agent.register();
     expect(res.res.status).toBe(429);
     expect(apiErrorBodySchema.parse(res.res.body).error.code).toBe("rate_limited");

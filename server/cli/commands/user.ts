@@ -12,11 +12,20 @@ import { readSecret } from "@server/lib/secret-prompt";
 const usage = `user create --email <e> --role <${roles.join("|")}> [--name <display name>] | user set-role --email <e> --role <role>`;
 
 function required(value: string | undefined, option: string): string {
-  if (value === undefined || value === "") throw new CliUsageError(`--${option} is required.\nUsage: npm run -s cli -- ${usage}`);
+  if (value === undefined || value === "")
+    throw new CliUsageError(`--${option} is required.\nUsage: npm run -s cli -- ${usage}`);
   return value;
 }
 
-function parseOr<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: Array<{ message: string }> } } }, value: unknown, option: string): T {
+function parseOr<T>(
+  schema: {
+    safeParse(
+      v: unknown,
+    ): { success: true; data: T } | { success: false; error: { issues: Array<{ message: string }> } };
+  },
+  value: unknown,
+  option: string,
+): T {
   const r = schema.safeParse(value);
   if (!r.success) throw new CliUsageError(`--${option}: ${r.error.issues[0]?.message ?? "not valid"}`);
   return r.data;
@@ -25,7 +34,8 @@ function parseOr<T>(schema: { safeParse(v: unknown): { success: true; data: T } 
 /** Password from JIGWRIGHT_PASSWORD, else asked twice on the terminal without echo. */
 async function obtainPassword(): Promise<string> {
   const fromEnv = process.env.JIGWRIGHT_PASSWORD;
-  if (fromEnv !== undefined && fromEnv !== "") return parseOr(passwordSchema, fromEnv, "password (JIGWRIGHT_PASSWORD)");
+  if (fromEnv !== undefined && fromEnv !== "")
+    return parseOr(passwordSchema, fromEnv, "password (JIGWRIGHT_PASSWORD)");
   if (!process.stdin.isTTY) {
     throw new CliUsageError("No terminal to ask for a password: set JIGWRIGHT_PASSWORD in the environment.");
   }
@@ -46,7 +56,9 @@ async function withDatabase<T>(fn: (db: Database) => Promise<T>): Promise<T> {
       throw new Error(
         `Cannot reach the database ${config.db.database} at ${config.db.host}:${config.db.port} ` +
           `(${err instanceof Error ? err.message : String(err)}). ` +
-          (config.dbManaged ? "Start it with `npm run db -- start` (or run `npm start`)." : "Check the DB_* settings."),
+          (config.dbManaged
+            ? "Start it with `npm run db -- start` (or run `npm start`)."
+            : "Check the DB_* settings."),
         { cause: err },
       );
     }
@@ -63,11 +75,18 @@ async function create(args: string[]): Promise<number> {
   rejectUnknown(parsed, ["email", "role", "name"]);
   const email = parseOr(emailSchema, required(single(parsed, "email"), "email"), "email");
   const role: Role = parseOr(roleSchema, required(single(parsed, "role"), "role"), "role");
-  const displayName = parseOr(displayNameSchema, single(parsed, "name") ?? email.split("@")[0] ?? email, "name");
+  const displayName = parseOr(
+    displayNameSchema,
+    single(parsed, "name") ?? email.split("@")[0] ?? email,
+    "name",
+  );
   const password = await obtainPassword();
   return withDatabase(async (db) => {
     try {
-      const user = await authService(userRepository(db.models)).register({ email, password, displayName }, role);
+      const user = await authService(userRepository(db.models)).register(
+        { email, password, displayName },
+        role,
+      );
       process.stderr.write(`Created ${user.role} ${user.email} (id ${user.id}).\n`);
       return 0;
     } catch (err) {

@@ -16,8 +16,28 @@ export interface DemoAccount {
 }
 
 export const demoAccounts: readonly DemoAccount[] = [
-  { role: "machinist", email: "machinist@quillbrook.test", password: "quillbrook-machinist", displayName: "Ada Penhallow" },
-  { role: "designer", email: "designer@quillbrook.test", password: "quillbrook-designer", displayName: "Bram Tolley" },
-  { role: "reviewer", email: "reviewer@quillbrook.test", password: "quillbrook-reviewer", displayName: "Cora Whitfield" },
-  { role: "admin", email: "admin@quillbrook.test", password: "quillbrook-admin", displayName: "Dev Marchetti" },
+  {
+    role: "machinist",
+    email: "machinist@quillbrook.test",
+    password: "quillbrook-machinist",
+    displayName: "Ada Penhallow",
+  },
+  {
+    role: "designer",
+    email: "designer@quillbrook.test",
+    password: "quillbrook-designer",
+    displayName: "Bram Tolley",
+  },
+  {
+    role: "reviewer",
+    email: "reviewer@quillbrook.test",
+    password: "quillbrook-reviewer",
+    displayName: "Cora Whitfield",
+  },
+  {
+    role: "admin",
+    email: "admin@quillbrook.test",
+    password: "quillbrook-admin",
+    displayName: "Dev Marchetti",
+  },
 ];

@@ -7,7 +7,10 @@ import { adminController } from "./controller";
 import type { AdminService } from "./service";
 
 const userIdParams = z.object({
-  id: z.coerce.number({ error: "User id must be a number." }).int().positive({ error: "User id must be a positive whole number." }),
+  id: z.coerce
+    .number({ error: "User id must be a number." })
+    .int()
+    .positive({ error: "User id must be a positive whole number." }),
 });
 
 /** `/api/admin`: admins only (401 for guests, 403 for every other role). */

@@ -4,7 +4,8 @@ import { HttpError } from "@server/lib/errors";
 
 const tooMany: Options["handler"] = (req, res, next) => {
   const reset = (req as { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-  if (reset) res.setHeader("Retry-After", String(Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000))));
+  if (reset)
+    res.setHeader("Retry-After", String(Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000))));
   next(new HttpError("rate_limited", "Too many sign-in attempts. Wait a few minutes and try again."));
 };
 

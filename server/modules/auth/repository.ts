@@ -8,10 +8,12 @@ export function userRepository(models: Models) {
   return {
     findById: (id: number, transaction?: Transaction) => User.findByPk(id, { transaction }),
     findByEmail: (email: string) => User.findOne({ where: { email } }),
-    create: (input: { email: string; displayName: string; passwordHash: string; role: Role }) => User.create(input),
+    create: (input: { email: string; displayName: string; passwordHash: string; role: Role }) =>
+      User.create(input),
     list: () => User.findAll({ order: [["id", "ASC"]] }),
     /** Locks the admin rows until the transaction ends, so two demotions cannot both pass the last-admin check. */
-    lockAdmins: (transaction: Transaction) => User.findAll({ where: { role: "admin" }, lock: true, transaction }),
+    lockAdmins: (transaction: Transaction) =>
+      User.findAll({ where: { role: "admin" }, lock: true, transaction }),
     setRole: async (user: UserRecord, role: Role, transaction?: Transaction) => {
       user.role = role;
       await user.save({ transaction });

@@ -42,12 +42,15 @@ export function createSessionLayer(config: AppConfig, db: Database, auth: AuthSe
 
   const passport = new passportModule.Passport();
   passport.use(
-    new LocalStrategy({ usernameField: "email", passwordField: "password", session: true }, (email, password, done) => {
-      auth.verifyCredentials(email, password).then(
-        (user) => done(null, user ?? false),
-        (err: unknown) => done(err),
-      );
-    }),
+    new LocalStrategy(
+      { usernameField: "email", passwordField: "password", session: true },
+      (email, password, done) => {
+        auth.verifyCredentials(email, password).then(
+          (user) => done(null, user ?? false),
+          (err: unknown) => done(err),
+        );
+      },
+    ),
   );
   passport.serializeUser((user, done) => done(null, user.id));
   passport.deserializeUser((id: number, done) => {

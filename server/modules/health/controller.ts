@@ -16,7 +16,11 @@ export function healthController(sequelize: Sequelize, timeoutMs: number) {
       res.status(503).json({
         status: "error",
         db: "down",
-        error: { code: "service_unavailable", message: "The database is unreachable; try again shortly.", details: [] },
+        error: {
+          code: "service_unavailable",
+          message: "The database is unreachable; try again shortly.",
+          details: [],
+        },
       });
     },
   };

@@ -56,7 +56,12 @@ export class TestAgent {
 
   /** Registers through the API (a machinist) and stays signed in. */
   async register(input: Partial<{ email: string; password: string; displayName: string }> = {}) {
-    const body = { email: uniqueEmail("reg"), password: testPassword, displayName: "Test Machinist", ...input };
+    const body = {
+      email: uniqueEmail("reg"),
+      password: testPassword,
+      displayName: "Test Machinist",
+      ...input,
+    };
     const res = await this.post("/api/auth/register", body);
     return { res, ...body };
   }
@@ -74,7 +79,10 @@ export class TestAgent {
 /** Makes an account of any role directly through the auth service (as the CLI does). */
 export async function createUser(db: Database, role: Role, displayName = `Test ${role}`) {
   const email = uniqueEmail(role);
-  const user = await authService(userRepository(db.models)).register({ email, password: testPassword, displayName }, role);
+  const user = await authService(userRepository(db.models)).register(
+    { email, password: testPassword, displayName },
+    role,
+  );
   return { ...user, password: testPassword };
 }
 
@@ -83,6 +91,7 @@ export async function signedInAs(app: express.Express, db: Database, role: Role)
   const user = await createUser(db, role);
   const agent = new TestAgent(app);
   const res = await agent.login(user.email, user.password);
-  if (res.status !== 200) throw new Error(`login as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== 200)
+    throw new Error(`login as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return { agent, user };
 }
