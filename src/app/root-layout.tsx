@@ -5,6 +5,8 @@ import { AccountMenu } from "@/features/auth/components/account-menu";
 import { useMe } from "@/features/auth/api/get-me";
 import { paths } from "@/lib/paths";
 import { templatesPath } from "@/features/catalogue/paths";
+import { designsPath } from "@/features/designs/paths";
+import { workshopPath } from "@/features/profiles/paths";
 
 /** The app shell: header with navigation and account, the page, the footer with the safety note. */
 export function RootLayout() {
@@ -15,6 +17,7 @@ export function RootLayout() {
     { to: templatesPath, label: "Templates" },
     { to: paths.camCheck, label: "Cam check" },
   ];
+  if (me.data) nav.push({ to: workshopPath, label: "My workshop" }, { to: designsPath, label: "Saved designs" });
   if (me.data?.role === "admin") nav.push({ to: paths.admin, label: "Accounts" });
 
   return (

@@ -1,6 +1,8 @@
 import { createBrowserRouter, type RouteObject } from "react-router";
 import { paths } from "@/lib/paths";
 import { configuratorRoute, templatesPath } from "@/features/catalogue/paths";
+import { designsPath, sharedDesignRoute } from "@/features/designs/paths";
+import { workshopPath } from "@/features/profiles/paths";
 import { AppCrash } from "./app-crash";
 import { LoadingScreen } from "./loading-screen";
 import { RootLayout } from "./root-layout";
@@ -26,6 +28,9 @@ export const routes: RouteObject[] = [
           { path: paths.camCheck, lazy: () => import("./routes/cam-check") },
           { path: templatesPath, lazy: () => import("./routes/templates") },
           { path: configuratorRoute, lazy: () => import("./routes/configurator") },
+          { path: workshopPath, lazy: () => import("./routes/workshop") },
+          { path: designsPath, lazy: () => import("./routes/designs") },
+          { path: sharedDesignRoute, lazy: () => import("./routes/shared-design") },
           { path: "*", lazy: () => import("./routes/not-found") },
         ],
       },

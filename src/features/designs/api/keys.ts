@@ -1,0 +1,10 @@
+/**
+ * Query keys of saved designs, general → specific: `designKeys.all` covers the list and every detail,
+ * so any change to a design refreshes both. The public shared view has its own root (no sign-in).
+ */
+export const designKeys = {
+  all: ["designs"] as const,
+  list: () => ["designs", "list"] as const,
+  detail: (id: number) => ["designs", "detail", id] as const,
+  shared: (token: string) => ["shared-designs", token] as const,
+};

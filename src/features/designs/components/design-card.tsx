@@ -1,0 +1,146 @@
+import { useState } from "react";
+import { Link } from "react-router";
+import { Button, buttonClasses } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import type { Design } from "@/shared/designs";
+import { useDuplicateDesign } from "../api/duplicate-design";
+import { useUpdateDesign } from "../api/update-design";
+import { configuratorHref } from "../model/configurator-link";
+import { formatWhen } from "../model/present";
+import { DetailsForm } from "./details-form";
+import { ParameterList } from "./parameter-list";
+import { SharePanel } from "./share-panel";
+import { VersionNote } from "./version-note";
+
+/**
+ * One saved design: what it is, its values, and what can be done with it — open in the configurator,
+ * rename, duplicate, share, delete (the page offers the undo).
+ */
+export function DesignCard({
+  design,
+  onDelete,
+  deleting,
+  onDuplicated,
+}: {
+  design: Design;
+  onDelete: (design: Design) => void;
+  deleting: boolean;
+  onDuplicated: (copy: Design) => void;
+}) {
+  const [editing, setEditing] = useState(false);
+  const [sharing, setSharing] = useState(false);
+  const update = useUpdateDesign();
+  const duplicate = useDuplicateDesign();
+  const headingId = `design-${design.id}-name`;
+  const canOpen = design.templateName !== null;
+
+  return (
+    <article
+      aria-labelledby={headingId}
+      className="space-y-4 rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
+      data-design-id={design.id}
+    >
+      {editing ? (
+        <DetailsForm
+          initial={{ name: design.name, notes: design.notes }}
+          onCancel={() => setEditing(false)}
+          onSave={async (details) => {
+            await update.mutateAsync({ id: design.id, changes: details });
+            setEditing(false);
+          }}
+        />
+      ) : (
+        <header className="space-y-1">
+          <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
+            <h3 id={headingId} className="text-xl">
+              {design.name}
+            </h3>
+            {design.share ? (
+              <span className="rounded bg-holds-50 px-2 py-0.5 text-xs font-semibold uppercase tracking-wide text-holds-700 ring-1 ring-inset ring-holds-600/40">
+                Shared
+              </span>
+            ) : null}
+          </div>
+          <p className="text-sm text-steel-600">
+            Changed {formatWhen(design.updatedAt)} · works in <span className="figure">{design.units}</span>
+          </p>
+          {design.notes ? <p className="whitespace-pre-wrap text-steel-800">{design.notes}</p> : null}
+        </header>
+      )}
+
+      <VersionNote
+        templateId={design.templateId}
+        templateName={design.templateName}
+        templateVersion={design.templateVersion}
+        newerVersion={design.newerVersion}
+        action={
+          design.newerVersion ? (
+            <Button
+              variant="secondary"
+              disabled={update.isPending}
+              onClick={() => update.mutate({ id: design.id, changes: { useCurrentTemplateVersion: true } })}
+            >
+              Move to version {design.newerVersion}
+            </Button>
+          ) : null
+        }
+      />
+
+      <details className="group">
+        <summary className="cursor-pointer font-semibold text-steel-800">
+          Values ({Object.keys(design.parameters).length})
+        </summary>
+        <ParameterList
+          parameters={design.parameters}
+          className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm"
+        />
+      </details>
+
+      <div className="flex flex-wrap gap-2">
+        {canOpen ? (
+          <Link
+            to={configuratorHref(design.templateId, design.units, design.parameters)}
+            className={buttonClasses("primary")}
+          >
+            Open in the configurator
+          </Link>
+        ) : null}
+        <Button
+          variant="secondary"
+          onClick={() => setEditing(true)}
+          disabled={editing}
+          aria-label={`Rename ${design.name}`}
+        >
+          Rename
+        </Button>
+        <Button
+          variant="secondary"
+          disabled={duplicate.isPending}
+          onClick={() => duplicate.mutate(design.id, { onSuccess: onDuplicated })}
+          aria-label={`Duplicate ${design.name}`}
+        >
+          {duplicate.isPending ? "Duplicating…" : "Duplicate"}
+        </Button>
+        <Button
+          variant="secondary"
+          aria-expanded={sharing}
+          onClick={() => setSharing((s) => !s)}
+          aria-label={`Share ${design.name}`}
+        >
+          Share…
+        </Button>
+        <Button
+          variant="quiet"
+          disabled={deleting}
+          onClick={() => onDelete(design)}
+          aria-label={`Delete ${design.name}`}
+        >
+          {deleting ? "Deleting…" : "Delete"}
+        </Button>
+      </div>
+      {sharing ? <SharePanel design={design} /> : null}
+      {update.isError && !editing ? <Notice tone="fault">{update.error.message}</Notice> : null}
+      {duplicate.isError ? <Notice tone="fault">{duplicate.error.message}</Notice> : null}
+    </article>
+  );
+}

@@ -1,0 +1,2 @@
+/** Where "my vises and machines" lives in the client. */
+export const workshopPath = "/workshop";
