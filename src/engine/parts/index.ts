@@ -5,5 +5,5 @@ export { baseGeometry, availableDepth, stepAt, type BaseGeometry, type TurnedSte
 export { guardPart, MIN_SIZE_MM, MAX_PATTERN_COUNT } from "./guard";
 export { featureName, featureRef, type GeometryIssue, type LengthFormatter } from "./issues";
 export { expandPattern, patternCopy } from "./patterns";
-export { resolveParts, type ResolvedParts, type ResolvePartsOptions } from "./resolve";
+export { resolveParts, validateResolvedPart, type ResolvedParts, type ResolvePartsOptions } from "./resolve";
 export { metricThread, ISO_261_COARSE_PITCH_MM, TAP_RUN_OUT_PITCHES, type MetricThreadGeometry } from "./threads";

@@ -43,6 +43,8 @@ export function compileValue(value: unknown, path: string, key: string | undefin
   if (value !== null && typeof value === "object") {
     const entries: Array<[string, ValueNode]> = [];
     let when: ValueNode | undefined;
+    // `datums` holds enumerations (min / max) under x, y, z: literal, never expressions.
+    if (key === "datums") return { t: "const", value };
     for (const [k, v] of Object.entries(value)) {
       const node = compileValue(v, `${path}.${k}`, k, options);
       if (k === "when") when = node;
@@ -110,4 +112,25 @@ export function scaleLengths(value: unknown, factor: number, key?: string): unkn
     return out;
   }
   return value;
+}
+
+/** Every name the expressions of a value tree read. */
+export function namesIn(node: ValueNode, out = new Set<string>(), skipKeys: readonly string[] = []): Set<string> {
+  switch (node.t) {
+    case "const":
+      break;
+    case "num":
+    case "text":
+    case "bool":
+      for (const n of node.expr.names) out.add(n);
+      break;
+    case "array":
+      for (const item of node.items) namesIn(item, out, skipKeys);
+      break;
+    case "object":
+      if (node.when) namesIn(node.when, out, skipKeys);
+      for (const [k, v] of node.entries) if (!skipKeys.includes(k)) namesIn(v, out, skipKeys);
+      break;
+  }
+  return out;
 }

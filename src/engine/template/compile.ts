@@ -7,7 +7,7 @@
 import type { Calculator } from "../calculators/types";
 import { compileExpression, ExpressionError, RESERVED_NAMES, type CompiledExpression, type CompileOptions } from "../expressions";
 import { MATERIAL_KEYS } from "../materials";
-import { compileValue, type ValueNode } from "../parts/template-values";
+import { compileValue, namesIn, type ValueNode } from "../parts/template-values";
 import { mmPerUnit } from "../units";
 import { compileMessage, MessageTemplateError, type CompiledMessage } from "./message";
 import type { AnalysisSpec, CheckSpec, DerivedKind, ParameterSpec, Template } from "./schema";
@@ -28,6 +28,8 @@ export interface CompiledAnalysis {
   calculator: Calculator;
   inputs: CompiledInput[];
   when?: CompiledExpression | boolean;
+  /** The analysis's `parameters`, or the parameters its inputs depend on. */
+  parameters: string[];
 }
 
 export interface CompiledCheck {
@@ -41,6 +43,8 @@ export interface CompiledCheck {
 export interface CompiledPart {
   id: string;
   node: ValueNode;
+  /** Parameters the part's expressions depend on (directly or through derived values and analyses). */
+  parameters: string[];
 }
 
 export interface CompiledTemplate {
@@ -89,6 +93,13 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
       return undefined;
     }
   };
+  // Which parameters each name depends on, for linking results back to the form.
+  const dependsOn = new Map<string, Set<string>>();
+  const paramsOf = (names: Iterable<string>): Set<string> => {
+    const out = new Set<string>();
+    for (const n of names) for (const p of dependsOn.get(n) ?? []) out.add(p);
+    return out;
+  };
   const claim = (name: string, path: string, what: string) => {
     if (RESERVED_NAMES.has(name)) issues.push({ path, message: `"${name}" is a reserved word of the expression language; choose another ${what}.` });
     else if (known.has(name)) issues.push({ path, message: `"${name}" is already defined; every parameter, derived value and analysis needs its own name.` });
@@ -100,6 +111,7 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
   template.parameters.forEach((spec, i) => {
     const path = `parameters[${i}]`;
     claim(spec.key, `${path}.key`, "key");
+    dependsOn.set(spec.key, new Set([spec.key]));
     switch (spec.kind) {
       case "length":
       case "angle":
@@ -142,6 +154,7 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
     const long = typeof entry === "string" ? { expression: entry } : entry;
     const expr = attempt(path, () => compileExpression(long.expression, { ...options(), context: path }));
     claim(key, path, "name");
+    if (expr) dependsOn.set(key, paramsOf(expr.names));
     if (expr) {
       derived.push({
         key,
@@ -181,7 +194,10 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
     });
     claim(spec.id, `${path}.id`, "analysis id");
     namespaces.add(spec.id);
-    if (calculator) analyses.push({ spec, calculator, inputs, ...(when !== undefined ? { when } : {}) });
+    const inputParams = paramsOf(inputs.flatMap((i) => ("expr" in i ? i.expr.names : [])));
+    dependsOn.set(spec.id, inputParams);
+    const parameters = spec.parameters ? [...spec.parameters] : [...inputParams];
+    if (calculator) analyses.push({ spec, calculator, inputs, parameters, ...(when !== undefined ? { when } : {}) });
   });
 
   // Checks, parts and fixtures see everything.
@@ -221,7 +237,7 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
       issues.push({ path: `${path}.material`, message: `"${part.material}" is not in the materials catalogue (${materialKeys.join(", ")}).` });
     }
     const node = attempt(path, () => compileValue(part, path, undefined, all));
-    if (node) parts.push({ id: part.id, node });
+    if (node) parts.push({ id: part.id, node, parameters: [...paramsOf(namesIn(node, new Set(), ["placement", "explode"]))] });
   });
 
   const fixtures: { id: string; label: string; node: ValueNode }[] = [];
