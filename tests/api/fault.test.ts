@@ -9,7 +9,10 @@ import { ensureDatabase, instance, startInstance, stopInstance } from "../../scr
  * The database goes away and comes back while the app keeps running. A third MariaDB instance
  * ("fault", port 3408) is used, so stopping it cannot disturb suites running on the shared test instance.
  */
-const fault = instance("fault");
+const fault = instance(
+  "fault",
+  process.env.TEST_FAULT_DB_PORT ? { port: Number(process.env.TEST_FAULT_DB_PORT) } : {},
+);
 const dbConfig = {
   host: "127.0.0.1",
   port: fault.port,
