@@ -1,5 +1,5 @@
 import { DesignsPage } from "@/features/designs/components/designs-page";
-import { paths } from "@/lib/paths";
+import { templatesPath } from "@/features/catalogue/paths";
 import { SignedInPage } from "../signed-in-page";
 
 /** "Saved designs" (signed-in users of any role). */
@@ -9,7 +9,7 @@ export function Component() {
       title="Saved designs"
       lead="Configurations you kept, each pinned to the template version it was saved on."
     >
-      <DesignsPage catalogueHref={paths.home} />
+      <DesignsPage catalogueHref={templatesPath} />
     </SignedInPage>
   );
 }
