@@ -3,9 +3,9 @@
  * client as in production) on an ephemeral loopback port, driven by Debian's Chromium through
  * playwright-core. Never downloads a browser.
  *
- * Database: the settings scripts/test.sh exports (TEST_DB_*, defaults in scripts/lib/instances.ts). When
- * the e2e project runs on its own, `prepareDatabase` starts the project's test instance if needed and
- * applies pending migrations (both idempotent; no demo data).
+ * The app comes from the API tests' `createTestApp` (tests/api/helpers), so both suites get the same
+ * app on the same TEST database (TEST_DB_*, which scripts/test.sh exports); run on its own it starts the
+ * test instance if needed and migrates it. Here it also serves dist/client, as in production.
  */
 import { randomBytes } from "node:crypto";
 import fs from "node:fs";
@@ -14,14 +14,12 @@ import os from "node:os";
 import path from "node:path";
 import type { Server } from "node:http";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
-import { createApp } from "@server/app";
-import { loadConfig, projectRoot } from "@server/config";
-import { createDatabase, type Database } from "@server/db";
+import { projectRoot } from "@server/config";
+import type { Database } from "@server/db";
 import { userRepository } from "@server/modules/auth/repository";
 import { authService } from "@server/modules/auth/service";
-import { testDbSettings } from "../../scripts/lib/instances";
-import { prepareDatabase } from "../../scripts/lib/prepare";
 import type { PublicUser, Role } from "@/shared/auth";
+import { createTestApp } from "../api/helpers/app";
 
 export const screenshotDir = path.join(projectRoot, ".tmp", "screenshots");
 const clientIndex = path.join(projectRoot, "dist", "client", "index.html");
@@ -60,20 +58,7 @@ async function ensureClientBuilt(): Promise<void> {
 
 export async function startApp(): Promise<E2eApp> {
   await ensureClientBuilt();
-  const testDb = { ...testDbSettings(), poolMax: 5 };
-  await prepareDatabase(testDb, { managed: testDb.host === "127.0.0.1", instanceName: "test", seed: false });
-
-  const config = loadConfig(process.env, {
-    env: "production",
-    host: "127.0.0.1",
-    port: 0,
-    logLevel: "silent",
-    db: testDb,
-    sessionSecret: randomBytes(32).toString("hex"),
-    serveClient: true,
-  });
-  const db = createDatabase(config.db);
-  const app = createApp({ config, db });
+  const { app, db, close } = await createTestApp({ config: { env: "production", serveClient: true } });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(0, "127.0.0.1", () => resolve(s));
     s.once("error", reject);
@@ -100,9 +85,7 @@ export async function startApp(): Promise<E2eApp> {
     async close() {
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
-      const layer = app.locals.sessionLayer as { close?: () => void } | undefined;
-      layer?.close?.();
-      await db.close();
+      await close();
     },
   };
 }
