@@ -12,6 +12,10 @@ import { counterboreCalculator } from "./counterbore";
 import { eccentricCamCalculator } from "./eccentric-cam";
 import { beamCalculator } from "./beam";
 import { cuttingSpeedCalculator } from "./cutting-speed";
+import { tSlotCalculator } from "./t-slot";
+import { holdingForceCalculator } from "./holding-force";
+import { strapClampCalculator } from "./strap-clamp";
+import { vBlockCalculator } from "./v-block";
 
 const all: Calculator[] = [
   fitCalculator,
@@ -22,6 +26,10 @@ const all: Calculator[] = [
   eccentricCamCalculator,
   beamCalculator,
   cuttingSpeedCalculator,
+  tSlotCalculator,
+  holdingForceCalculator,
+  strapClampCalculator,
+  vBlockCalculator,
 ];
 
 for (const calculator of all) registerCalculator(calculator);
