@@ -28,7 +28,11 @@ export const catalogueKeys = {
 };
 
 export const templatesQueryOptions = () =>
-  queryOptions({ queryKey: catalogueKeys.list(), queryFn: ({ signal }) => getTemplates(signal), staleTime: 5 * 60_000 });
+  queryOptions({
+    queryKey: catalogueKeys.list(),
+    queryFn: ({ signal }) => getTemplates(signal),
+    staleTime: 5 * 60_000,
+  });
 
 export function useTemplates() {
   return useQuery(templatesQueryOptions());

@@ -20,7 +20,9 @@ export function CatalogueFilters({
   const chip = (active: boolean) =>
     cn(
       "inline-flex min-h-10 cursor-pointer items-center gap-1.5 rounded-full border px-4 font-semibold has-[:focus-visible]:outline has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-offset-2 has-[:focus-visible]:outline-spark-500",
-      active ? "border-steel-900 bg-steel-900 text-white" : "border-steel-300 bg-white text-steel-800 hover:bg-steel-100",
+      active
+        ? "border-steel-900 bg-steel-900 text-white"
+        : "border-steel-300 bg-white text-steel-800 hover:bg-steel-100",
     );
   const options: Array<{ value: string | null; label: string; count: number }> = [
     { value: null, label: "All", count: total },
@@ -33,7 +35,13 @@ export function CatalogueFilters({
         <div className="flex flex-wrap gap-2">
           {options.map((o) => (
             <label key={o.value ?? "all"} className={chip(family === o.value)}>
-              <input type="radio" name="family" className="sr-only" checked={family === o.value} onChange={() => onFamily(o.value)} />
+              <input
+                type="radio"
+                name="family"
+                className="sr-only"
+                checked={family === o.value}
+                onChange={() => onFamily(o.value)}
+              />
               {o.label}
               <span className="figure text-sm opacity-80">{o.count}</span>
             </label>

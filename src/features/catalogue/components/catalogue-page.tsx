@@ -42,8 +42,8 @@ export function CataloguePage({ renderPicture, templateHref, camCheckHref }: Cat
     <div className="mx-auto max-w-6xl px-4 py-8">
       <h1 className="text-3xl sm:text-4xl">Templates</h1>
       <p className="mt-2 max-w-3xl text-lg text-steel-700">
-        Accessories to size to your own machine. Pick one, enter your vise or machine measurements, and see the checks, figures and
-        drawings before you cut metal.
+        Accessories to size to your own machine. Pick one, enter your vise or machine measurements, and see
+        the checks, figures and drawings before you cut metal.
       </p>
 
       {templates.isPending ? (
@@ -73,7 +73,8 @@ export function CataloguePage({ renderPicture, templateHref, camCheckHref }: Cat
         <div className="mt-8 max-w-2xl rounded-lg border border-dashed border-steel-300 bg-white p-6">
           <h2 className="text-xl">No templates are published yet</h2>
           <p className="mt-2 text-steel-700">
-            Templates appear here once a designer publishes one and a reviewer approves it. The cam check works without one.
+            Templates appear here once a designer publishes one and a reviewer approves it. The cam check
+            works without one.
           </p>
           <Link to={camCheckHref} className={buttonClasses("primary", "mt-4")}>
             Open the cam check

@@ -4,12 +4,22 @@ import type { TemplateSummary } from "../api/get-templates";
 import { familyLabel } from "../model/filter";
 
 /** One template: its picture (rendered from its model), family, name and summary; the whole card opens it. */
-export function TemplateCard({ template, href, picture }: { template: TemplateSummary; href: string; picture: ReactNode }) {
+export function TemplateCard({
+  template,
+  href,
+  picture,
+}: {
+  template: TemplateSummary;
+  href: string;
+  picture: ReactNode;
+}) {
   return (
     <li className="group relative flex flex-col overflow-hidden rounded-lg border border-steel-200 bg-white shadow-sm transition-shadow focus-within:shadow-md hover:shadow-md">
       {picture}
       <div className="flex flex-1 flex-col gap-1 border-t border-steel-200 p-4">
-        <p className="text-sm font-semibold uppercase tracking-wide text-spark-700">{familyLabel(template.family)}</p>
+        <p className="text-sm font-semibold uppercase tracking-wide text-spark-700">
+          {familyLabel(template.family)}
+        </p>
         <h2 className="text-xl">
           <Link to={href} className="rounded after:absolute after:inset-0 after:content-[''] hover:underline">
             {template.name}

@@ -16,7 +16,10 @@ export const familyLabel = (family: string) => familyLabels[family] ?? family.re
 
 /** Lower case, accents folded, so "Vise" finds "vise" and "étau" finds "etau". */
 function fold(text: string): string {
-  return text.normalize("NFD").replace(/[\u0300-\u036f]/g, "").toLowerCase();
+  return text
+    .normalize("NFD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase();
 }
 
 /** The words of a search: split on anything that is not a letter or digit. */
@@ -30,7 +33,11 @@ export function searchWords(query: string): string[] {
  * Templates matching a family (null = all) and every word of the search, each word found at the start of
  * a word in the name, summary, family or id ("cam" finds "cam-lock", "stop" finds "stops").
  */
-export function filterTemplates(templates: readonly TemplateSummary[], family: string | null, query: string): TemplateSummary[] {
+export function filterTemplates(
+  templates: readonly TemplateSummary[],
+  family: string | null,
+  query: string,
+): TemplateSummary[] {
   const words = searchWords(query);
   return templates.filter((t) => {
     if (family && t.family !== family) return false;
@@ -47,5 +54,9 @@ export function familiesOf(templates: readonly TemplateSummary[]): Array<{ famil
   for (const t of templates) counts.set(t.family, (counts.get(t.family) ?? 0) + 1);
   return [...counts.entries()]
     .map(([family, count]) => ({ family, count }))
-    .sort((a, b) => (order.indexOf(a.family) + 1 || 99) - (order.indexOf(b.family) + 1 || 99) || a.family.localeCompare(b.family));
+    .sort(
+      (a, b) =>
+        (order.indexOf(a.family) + 1 || 99) - (order.indexOf(b.family) + 1 || 99) ||
+        a.family.localeCompare(b.family),
+    );
 }

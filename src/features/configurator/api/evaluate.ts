@@ -59,7 +59,11 @@ export async function evaluateTemplate(
   units: LengthUnit,
   signal?: AbortSignal,
 ): Promise<EvaluationView> {
-  return api.post(`/api/templates/${encodeURIComponent(id)}/evaluate`, { body: { parameters, units }, schema: evaluationSchema, signal });
+  return api.post(`/api/templates/${encodeURIComponent(id)}/evaluate`, {
+    body: { parameters, units },
+    schema: evaluationSchema,
+    signal,
+  });
 }
 
 export interface EvaluationRequest {

@@ -7,5 +7,6 @@ import type { LengthUnit } from "@/engine/units";
 export const configuratorKeys = {
   all: ["templates"] as const,
   detail: (id: string) => ["templates", "detail", id] as const,
-  evaluation: (id: string, units: LengthUnit, parameters: unknown) => ["templates", "evaluate", id, units, parameters] as const,
+  evaluation: (id: string, units: LengthUnit, parameters: unknown) =>
+    ["templates", "evaluate", id, units, parameters] as const,
 };

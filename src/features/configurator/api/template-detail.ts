@@ -21,19 +21,28 @@ export const templateDetailSchema = z.object({
   materialNames: z.record(z.string(), z.string()).optional(),
   cautions: z.array(z.string()).optional(),
   /** The template's analyses, for their labels. */
-  analyses: z.array(z.object({ id: z.string(), label: z.string().optional(), calculator: z.string().optional() })).optional(),
+  analyses: z
+    .array(z.object({ id: z.string(), label: z.string().optional(), calculator: z.string().optional() }))
+    .optional(),
 });
 export type TemplateDetail = z.infer<typeof templateDetailSchema>;
 
 /** The route may wrap the template (`{ template }`) or send it bare; both are accepted. */
-const responseSchema = z.union([z.object({ template: templateDetailSchema }).transform((r) => r.template), templateDetailSchema]);
+const responseSchema = z.union([
+  z.object({ template: templateDetailSchema }).transform((r) => r.template),
+  templateDetailSchema,
+]);
 
 export async function getTemplate(id: string, signal?: AbortSignal): Promise<TemplateDetail> {
   return api.get(`/api/templates/${encodeURIComponent(id)}`, { schema: responseSchema, signal });
 }
 
 export const templateDetailQueryOptions = (id: string) =>
-  queryOptions({ queryKey: configuratorKeys.detail(id), queryFn: ({ signal }) => getTemplate(id, signal), staleTime: 5 * 60_000 });
+  queryOptions({
+    queryKey: configuratorKeys.detail(id),
+    queryFn: ({ signal }) => getTemplate(id, signal),
+    staleTime: 5 * 60_000,
+  });
 
 export function useTemplateDetail(id: string) {
   return useQuery(templateDetailQueryOptions(id));

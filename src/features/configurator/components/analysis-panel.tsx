@@ -21,7 +21,10 @@ export function AnalysisPanel({
   const views = readAnalyses(analyses);
   if (views.length === 0) return null;
   return (
-    <section aria-labelledby="analysis-heading" className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm">
+    <section
+      aria-labelledby="analysis-heading"
+      className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
+    >
       <h2 id="analysis-heading" className="text-xl">
         Engineering figures
       </h2>
@@ -30,7 +33,12 @@ export function AnalysisPanel({
           <div key={view.id} data-analysis={view.id}>
             <h3 className="mb-2 text-lg">{labels[view.id] ?? view.id}</h3>
             {view.kind === "cam" ? (
-              <CamAnalysisView id={view.id} cam={view.cam} units={units} {...(handForceN !== undefined ? { handForceN } : {})} />
+              <CamAnalysisView
+                id={view.id}
+                cam={view.cam}
+                units={units}
+                {...(handForceN !== undefined ? { handForceN } : {})}
+              />
             ) : view.kind === "failed" ? (
               <Notice tone="fault" title="Could not be worked out for these values">
                 {view.reason}

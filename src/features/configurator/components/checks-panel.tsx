@@ -26,7 +26,10 @@ export function ChecksPanel({
   const passing = ordered.filter((c) => c.passed);
   const counts = countFailures(checks);
   return (
-    <section aria-labelledby="checks-heading" className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm">
+    <section
+      aria-labelledby="checks-heading"
+      className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
+    >
       <h2 id="checks-heading" className="text-xl">
         Checks
       </h2>
@@ -86,7 +89,9 @@ function CheckItem({
   return (
     <li className={cn("rounded-md border-l-4 px-3 py-2", l.box)} data-severity={check.severity}>
       <p className="flex flex-wrap items-start gap-2 text-steel-900">
-        <span className={cn("rounded px-1.5 py-0.5 text-xs font-bold uppercase tracking-wide", l.mark)}>{l.word}</span>
+        <span className={cn("rounded px-1.5 py-0.5 text-xs font-bold uppercase tracking-wide", l.mark)}>
+          {l.word}
+        </span>
         <span className="min-w-0 flex-1">{check.message}</span>
       </p>
       {linked.length > 0 ? (

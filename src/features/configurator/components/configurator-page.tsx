@@ -55,7 +55,9 @@ export function ConfiguratorPage(props: ConfiguratorPageProps) {
       <div className="mx-auto max-w-3xl px-4 py-10">
         <h1 className="text-3xl">{notFound ? "No such template" : "The template could not be loaded"}</h1>
         <Notice tone={notFound ? "info" : "fault"} className="mt-4">
-          {notFound ? `There is no published template “${props.templateId}”. It may have been retired or the link mistyped.` : detail.error.message}
+          {notFound
+            ? `There is no published template “${props.templateId}”. It may have been retired or the link mistyped.`
+            : detail.error.message}
         </Notice>
         <div className="mt-6 flex flex-wrap gap-3">
           {!notFound ? (
@@ -73,7 +75,12 @@ export function ConfiguratorPage(props: ConfiguratorPageProps) {
   return <Configurator {...props} template={detail.data} />;
 }
 
-function Configurator({ template, signedIn, renderViewer, links }: ConfiguratorPageProps & { template: TemplateDetail }) {
+function Configurator({
+  template,
+  signedIn,
+  renderViewer,
+  links,
+}: ConfiguratorPageProps & { template: TemplateDetail }) {
   const config = useConfiguration(template);
   const { specs, units, form } = config;
   const location = useLocation();
@@ -96,7 +103,9 @@ function Configurator({ template, signedIn, renderViewer, links }: ConfiguratorP
     [template.analyses],
   );
   const hand = evaluation?.parameters.handForce;
-  const failingErrors = (evaluation?.checks ?? []).filter((c) => c.severity === "error" && !c.passed).map((c) => c.message);
+  const failingErrors = (evaluation?.checks ?? [])
+    .filter((c) => c.severity === "error" && !c.passed)
+    .map((c) => c.message);
   const signInHref = `${links.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`;
 
   return (
@@ -122,7 +131,12 @@ function Configurator({ template, signedIn, renderViewer, links }: ConfiguratorP
       <div className="mt-6 grid items-start gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <div className="space-y-4">
           {signedIn ? (
-            <ViseFill parameterKeys={new Set(specs.map((s) => s.key))} labelOf={labelOf} onFill={config.fillFromMm} visesHref={links.vises} />
+            <ViseFill
+              parameterKeys={new Set(specs.map((s) => s.key))}
+              labelOf={labelOf}
+              onFill={config.fillFromMm}
+              visesHref={links.vises}
+            />
           ) : (
             <p className="rounded-lg border border-steel-200 bg-white p-3 text-sm text-steel-700">
               <Link to={signInHref} className="font-semibold text-spark-700 underline">
@@ -165,7 +179,12 @@ function Configurator({ template, signedIn, renderViewer, links }: ConfiguratorP
           )}
           <div className="grid gap-4 xl:grid-cols-2">
             {signedIn ? (
-              <SaveDesignForm templateId={template.id} templateName={template.name} parameters={config.templateParameters} units={units} />
+              <SaveDesignForm
+                templateId={template.id}
+                templateName={template.name}
+                parameters={config.templateParameters}
+                units={units}
+              />
             ) : null}
             <DownloadsPanel
               templateId={template.id}

@@ -5,7 +5,14 @@ import { Notice } from "@/components/ui/notice";
 import type { ParameterValue } from "@/engine/parameters";
 import type { LengthUnit } from "@/engine/units";
 import { ApiError } from "@/lib/api-error";
-import { exportUrl, fetchDownload, saveBlob, type DownloadProgress, type ExportFormat, type Projection } from "../api/download-file";
+import {
+  exportUrl,
+  fetchDownload,
+  saveBlob,
+  type DownloadProgress,
+  type ExportFormat,
+  type Projection,
+} from "../api/download-file";
 
 const files: Array<{ format: ExportFormat; label: string; detail: string }> = [
   { format: "pdf", label: "Drawing (PDF)", detail: "every sheet, cut list and operation sheet" },
@@ -51,11 +58,17 @@ export function DownloadsPanel({
 
   if (!signedIn) {
     return (
-      <section aria-labelledby="downloads-heading" className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm">
+      <section
+        aria-labelledby="downloads-heading"
+        className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
+      >
         <h2 id="downloads-heading" className="text-xl">
           Drawings and files
         </h2>
-        <p className="mt-1 text-steel-700">Sign in to download the drawing, cut list, STEP and STL files for this configuration, and to save it.</p>
+        <p className="mt-1 text-steel-700">
+          Sign in to download the drawing, cut list, STEP and STL files for this configuration, and to save
+          it.
+        </p>
         <Link to={signInHref} className={buttonClasses("primary", "mt-3")}>
           Sign in to download
         </Link>
@@ -73,7 +86,12 @@ export function DownloadsPanel({
     setJob({ format, progress: null });
     try {
       const url = exportUrl(templateId, format, parameters, units, projection);
-      const { blob, fileName } = await fetchDownload(url, `${templateId}.${format}`, (progress) => setJob({ format, progress }), controller.signal);
+      const { blob, fileName } = await fetchDownload(
+        url,
+        `${templateId}.${format}`,
+        (progress) => setJob({ format, progress }),
+        controller.signal,
+      );
       saveBlob(blob, fileName);
       setDone(`${fileName} downloaded (${kb(blob.size)}).`);
     } catch (error) {
@@ -85,16 +103,21 @@ export function DownloadsPanel({
   }
 
   const busy = job !== null;
-  const pct = job?.progress?.totalBytes ? Math.round((100 * job.progress.receivedBytes) / job.progress.totalBytes) : null;
+  const pct = job?.progress?.totalBytes
+    ? Math.round((100 * job.progress.receivedBytes) / job.progress.totalBytes)
+    : null;
   return (
-    <section aria-labelledby="downloads-heading" className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm">
+    <section
+      aria-labelledby="downloads-heading"
+      className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
+    >
       <h2 id="downloads-heading" className="text-xl">
         Drawings and files
       </h2>
       {failingErrors.length > 0 ? (
         <Notice tone="caution" className="mt-2" title={`The drawing will be stamped “NOT CHECKED — ERRORS”`}>
-          {failingErrors.length === 1 ? "One error check fails" : `${failingErrors.length} error checks fail`}: {failingErrors.join(" ")} You can
-          still download it, but fix the errors before making the part.
+          {failingErrors.length === 1 ? "One error check fails" : `${failingErrors.length} error checks fail`}
+          : {failingErrors.join(" ")} You can still download it, but fix the errors before making the part.
         </Notice>
       ) : null}
       <div className="mt-3 flex flex-wrap items-center gap-3">
@@ -148,7 +171,11 @@ export function DownloadsPanel({
               className="h-2 overflow-hidden rounded bg-steel-200"
             >
               <div
-                className={pct === null ? "h-full w-1/3 animate-pulse bg-spark-500 motion-reduce:animate-none" : "h-full bg-spark-500"}
+                className={
+                  pct === null
+                    ? "h-full w-1/3 animate-pulse bg-spark-500 motion-reduce:animate-none"
+                    : "h-full bg-spark-500"
+                }
                 style={pct === null ? undefined : { width: `${pct}%` }}
               />
             </div>

@@ -35,8 +35,17 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
   if (spec.kind === "boolean") {
     return (
       <div className="flex flex-col gap-1">
-        <label htmlFor={id} className="flex min-h-11 cursor-pointer items-center gap-3 font-semibold text-steel-900">
-          <input id={id} type="checkbox" className="size-5 accent-spark-600" aria-describedby={helpId} {...form.register(spec.key)} />
+        <label
+          htmlFor={id}
+          className="flex min-h-11 cursor-pointer items-center gap-3 font-semibold text-steel-900"
+        >
+          <input
+            id={id}
+            type="checkbox"
+            className="size-5 accent-spark-600"
+            aria-describedby={helpId}
+            {...form.register(spec.key)}
+          />
           {spec.label}
         </label>
         {spec.help ? (
@@ -85,20 +94,25 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
   const registered = form.register(spec.key);
   const text = form.watch(spec.key);
   const typed = typeof text === "string" ? parseDecimal(text) : null;
-  const step = spec.kind === "length" && units === "in" ? (spec.step ? spec.step / 25.4 : 0.01) : (spec.step ?? (spec.kind === "count" ? 1 : 0.1));
+  const step =
+    spec.kind === "length" && units === "in"
+      ? spec.step
+        ? spec.step / 25.4
+        : 0.01
+      : (spec.step ?? (spec.kind === "count" ? 1 : 0.1));
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="flex items-baseline justify-between gap-2 font-semibold text-steel-900">
-        <span>
+      <div className="flex items-baseline justify-between gap-2">
+        <label htmlFor={id} className="font-semibold text-steel-900">
           {spec.label}
           {unit ? <span className="sr-only"> ({unit.spoken})</span> : null}
-        </span>
+        </label>
         {range ? (
-          <span id={rangeId} className="figure text-sm font-normal text-steel-600">
+          <span id={rangeId} className="figure text-sm text-steel-600">
             {range}
           </span>
         ) : null}
-      </label>
+      </div>
       <div className={cn(inputBox, error ? "border-fault-700" : "border-steel-300 hover:border-steel-400")}>
         <input
           id={id}
@@ -107,7 +121,9 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
           autoComplete="off"
           spellCheck={false}
           aria-invalid={error ? true : undefined}
-          aria-describedby={[errorId, range ? rangeId : undefined, helpId].filter(Boolean).join(" ") || undefined}
+          aria-describedby={
+            [errorId, range ? rangeId : undefined, helpId].filter(Boolean).join(" ") || undefined
+          }
           className="figure w-full min-w-0 bg-transparent px-3 text-right text-lg text-steel-950 outline-none"
           {...registered}
           onKeyDown={(e) => {
@@ -115,11 +131,17 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
             if ((e.key !== "ArrowUp" && e.key !== "ArrowDown") || typed === null) return;
             e.preventDefault();
             const next = typed + (e.key === "ArrowUp" ? step : -step);
-            form.setValue(spec.key, formatForInput(spec, next, units), { shouldValidate: true, shouldDirty: true });
+            form.setValue(spec.key, formatForInput(spec, next, units), {
+              shouldValidate: true,
+              shouldDirty: true,
+            });
           }}
         />
         {unit ? (
-          <span aria-hidden="true" className="figure flex min-w-12 items-center justify-center border-l border-steel-200 bg-steel-100 px-2 text-steel-700">
+          <span
+            aria-hidden="true"
+            className="figure flex min-w-12 items-center justify-center border-l border-steel-200 bg-steel-100 px-2 text-steel-700"
+          >
             {unit.symbol}
           </span>
         ) : null}

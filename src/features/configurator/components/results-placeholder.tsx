@@ -1,7 +1,10 @@
 /** Stands where the checks and figures will be while the first evaluation is computed, so nothing jumps. */
 export function ResultsPlaceholder({ failed, onRetry }: { failed?: string | null; onRetry?: () => void }) {
   return (
-    <section aria-label="Checks and figures" className="rounded-lg border border-dashed border-steel-300 bg-white p-4">
+    <section
+      aria-label="Checks and figures"
+      className="rounded-lg border border-dashed border-steel-300 bg-white p-4"
+    >
       <h2 className="text-xl">Checks</h2>
       {failed ? (
         <div className="mt-2 space-y-2">

@@ -47,7 +47,10 @@ export function SaveDesignForm({
   }
 
   return (
-    <section aria-labelledby="save-heading" className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm">
+    <section
+      aria-labelledby="save-heading"
+      className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
+    >
       <h2 id="save-heading" className="text-xl">
         Save this design
       </h2>
@@ -81,7 +84,8 @@ export function SaveDesignForm({
       <div aria-live="polite" className="mt-2">
         {save.isSuccess ? (
           <Notice tone="holds" title={`Saved as “${save.data.name}”`}>
-            Pinned to version {save.data.templateVersion} of the template, in {save.data.units === "in" ? "inches" : "millimetres"}.
+            Pinned to version {save.data.templateVersion} of the template, in{" "}
+            {save.data.units === "in" ? "inches" : "millimetres"}.
           </Notice>
         ) : null}
         {save.isError && !(save.error instanceof ApiError && save.error.fieldErrors.name) ? (

@@ -7,7 +7,13 @@ const options: Array<{ value: LengthUnit; label: string; spoken: string }> = [
 ];
 
 /** Millimetres or inches for every length on the page; a pair of radio buttons (arrow keys move between them). */
-export function UnitSwitch({ value, onChange }: { value: LengthUnit; onChange: (units: LengthUnit) => void }) {
+export function UnitSwitch({
+  value,
+  onChange,
+}: {
+  value: LengthUnit;
+  onChange: (units: LengthUnit) => void;
+}) {
   return (
     <fieldset className="flex items-center gap-3">
       <legend className="sr-only">Length units</legend>

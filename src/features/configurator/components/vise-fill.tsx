@@ -4,7 +4,10 @@ import type { Vise } from "@/shared/profiles";
 import { useMyVises } from "../api/vises";
 
 /** Which vise measurement fills which template parameter. */
-export const viseParameterMap: ReadonlyArray<{ from: keyof Pick<Vise, "jawWidthMm" | "jawHeightMm" | "jawThicknessMm">; to: string }> = [
+export const viseParameterMap: ReadonlyArray<{
+  from: keyof Pick<Vise, "jawWidthMm" | "jawHeightMm" | "jawThicknessMm">;
+  to: string;
+}> = [
   { from: "jawWidthMm", to: "jawWidth" },
   { from: "jawHeightMm", to: "jawHeight" },
   { from: "jawThicknessMm", to: "jawThickness" },

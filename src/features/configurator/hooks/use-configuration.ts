@@ -35,7 +35,10 @@ export function useConfiguration(template: TemplateDetail) {
 
   const [units, setUnits] = useState<LengthUnit>(initial.units);
   const exactRef = useRef<ExactLengths>(initial.state.exact);
-  const schema = useMemo(() => buildFormSchema(specs, template.units, units, () => exactRef.current), [specs, template.units, units]);
+  const schema = useMemo(
+    () => buildFormSchema(specs, template.units, units, () => exactRef.current),
+    [specs, template.units, units],
+  );
   const schemaRef = useRef(schema);
   schemaRef.current = schema;
 
@@ -53,7 +56,10 @@ export function useConfiguration(template: TemplateDetail) {
   const form = useForm<FormValues>({ defaultValues: initial.state.values, resolver, mode: "onChange" });
   const values = useWatch({ control: form.control }) as FormValues;
 
-  const state: FormState = useMemo(() => ({ values: { ...initial.state.values, ...values }, exact: exactRef.current }), [values, initial]);
+  const state: FormState = useMemo(
+    () => ({ values: { ...initial.state.values, ...values }, exact: exactRef.current }),
+    [values, initial],
+  );
 
   /** Field key → its problem (the same rule the schema applies), for deciding whether to send. */
   const problems = useMemo(() => {
@@ -67,8 +73,14 @@ export function useConfiguration(template: TemplateDetail) {
   }, [specs, state, template.units, units]);
   const valid = Object.keys(problems).length === 0;
 
-  const userParameters = useMemo(() => (valid ? parameterValues(specs, state, units, units) : null), [valid, specs, state, units]);
-  const templateParameters = useMemo(() => (valid ? parameterValues(specs, state, units, template.units) : null), [valid, specs, state, units, template.units]);
+  const userParameters = useMemo(
+    () => (valid ? parameterValues(specs, state, units, units) : null),
+    [valid, specs, state, units],
+  );
+  const templateParameters = useMemo(
+    () => (valid ? parameterValues(specs, state, units, template.units) : null),
+    [valid, specs, state, units, template.units],
+  );
 
   /** Replaces every field (after a unit switch or a fill) and re-checks them in the current units. */
   const applyState = useCallback(
@@ -83,7 +95,10 @@ export function useConfiguration(template: TemplateDetail) {
   const switchUnits = useCallback(
     (to: LengthUnit) => {
       if (to === units) return;
-      const current: FormState = { values: { ...initial.state.values, ...form.getValues() }, exact: exactRef.current };
+      const current: FormState = {
+        values: { ...initial.state.values, ...form.getValues() },
+        exact: exactRef.current,
+      };
       const next = convertFormState(specs, current, units, to);
       setUnits(to);
       applyState(next);
@@ -94,7 +109,10 @@ export function useConfiguration(template: TemplateDetail) {
   /** Fills lengths given in mm (a vise profile); returns the keys it filled. */
   const fillFromMm = useCallback(
     (lengthsMm: Record<string, number>) => {
-      const current: FormState = { values: { ...initial.state.values, ...form.getValues() }, exact: exactRef.current };
+      const current: FormState = {
+        values: { ...initial.state.values, ...form.getValues() },
+        exact: exactRef.current,
+      };
       const { state: next, filled } = fillLengthsMm(specs, current, lengthsMm, units);
       applyState(next);
       return filled;
@@ -102,16 +120,17 @@ export function useConfiguration(template: TemplateDetail) {
     [initial, form, specs, units, applyState],
   );
 
-  // The address bar follows every valid configuration (replace, so Back leaves the page instead of undoing typing).
-  const lastWritten = useRef<string | null>(null);
-  const wanted = templateParameters ? writeUrlConfiguration(specs, templateParameters, units).toString() : null;
+  // The address bar follows every valid configuration (replace, so Back leaves the page instead of undoing
+  // typing). Addresses this hook wrote are remembered: the router applies a write a moment later, and that
+  // arrival must not be mistaken for a link from outside.
+  const written = useRef<string[]>([searchParams.toString()]);
+  const wanted = templateParameters
+    ? writeUrlConfiguration(specs, templateParameters, units).toString()
+    : null;
   useEffect(() => {
-    if (wanted === null || wanted === searchParams.toString()) {
-      if (wanted !== null) lastWritten.current = wanted;
-      return;
-    }
+    if (wanted === null || wanted === searchParams.toString()) return;
     const timer = setTimeout(() => {
-      lastWritten.current = wanted;
+      written.current = [...written.current.slice(-19), wanted];
       setSearchParams(new URLSearchParams(wanted), { replace: true, preventScrollReset: true });
     }, 250);
     return () => clearTimeout(timer);
@@ -120,10 +139,10 @@ export function useConfiguration(template: TemplateDetail) {
   // An address changed from outside (a link to another configuration of this template) is read back in.
   const searchText = searchParams.toString();
   useEffect(() => {
-    if (lastWritten.current === null || searchText === lastWritten.current) return;
+    if (written.current.includes(searchText)) return;
+    written.current = [...written.current.slice(-19), searchText];
     const url = readUrlConfiguration(new URLSearchParams(searchText), specs);
     const nextUnits = url.units ?? units;
-    lastWritten.current = searchText;
     setUnits(nextUnits);
     applyState(formStateFromTemplateValues(specs, url.values, template.units, nextUnits));
     // Only a change of the address should trigger this.

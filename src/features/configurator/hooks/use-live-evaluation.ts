@@ -28,12 +28,18 @@ export function useLiveEvaluation(
 ) {
   const requestKey = parameters ? JSON.stringify({ parameters, units }) : null;
   const settledKey = useDebouncedValue(requestKey, evaluateDebounceMs);
-  const settled = useMemo(() => (settledKey ? (JSON.parse(settledKey) as EvaluationRequest) : null), [settledKey]);
+  const settled = useMemo(
+    () => (settledKey ? (JSON.parse(settledKey) as EvaluationRequest) : null),
+    [settledKey],
+  );
   const query = useEvaluation(templateId, settled);
 
-  const [lastGood, setLastGood] = useState<{ request: EvaluationRequest; evaluation: EvaluationView } | null>(null);
+  const [lastGood, setLastGood] = useState<{ request: EvaluationRequest; evaluation: EvaluationView } | null>(
+    null,
+  );
   useEffect(() => {
-    if (query.data && !query.isPlaceholderData && settled) setLastGood({ request: settled, evaluation: query.data });
+    if (query.data && !query.isPlaceholderData && settled)
+      setLastGood({ request: settled, evaluation: query.data });
   }, [query.data, query.isPlaceholderData, settled]);
 
   const error = query.isError && settledKey === requestKey ? query.error : null;

@@ -33,7 +33,12 @@ export type CamAnalysis = z.infer<typeof camAnalysisSchema>;
 export type AnalysisView =
   | { id: string; kind: "cam"; cam: CamAnalysis }
   | { id: string; kind: "failed"; reason: string }
-  | { id: string; kind: "figures"; figures: Array<{ key: string; value: number | string | boolean }>; cautions: string[] };
+  | {
+      id: string;
+      kind: "figures";
+      figures: Array<{ key: string; value: number | string | boolean }>;
+      cautions: string[];
+    };
 
 /** Reads each analysis of an evaluation into what the panel can draw. */
 export function readAnalyses(analyses: Readonly<Record<string, Record<string, unknown>>>): AnalysisView[] {
@@ -42,9 +47,13 @@ export function readAnalyses(analyses: Readonly<Record<string, Record<string, un
     const cam = camAnalysisSchema.safeParse(result);
     if (cam.success) return { id, kind: "cam", cam: cam.data };
     const figures = Object.entries(result)
-      .filter((entry): entry is [string, number | string | boolean] => ["number", "string", "boolean"].includes(typeof entry[1]))
+      .filter((entry): entry is [string, number | string | boolean] =>
+        ["number", "string", "boolean"].includes(typeof entry[1]),
+      )
       .filter(([key]) => key !== "explanation");
-    const cautions = Array.isArray(result.cautions) ? result.cautions.filter((c): c is string => typeof c === "string") : [];
+    const cautions = Array.isArray(result.cautions)
+      ? result.cautions.filter((c): c is string => typeof c === "string")
+      : [];
     return { id, kind: "figures", figures: figures.map(([key, value]) => ({ key, value })), cautions };
   });
 }

@@ -26,7 +26,9 @@ export function orderChecks<T extends CheckResultView>(checks: readonly T[]): T[
 }
 
 /** How many checks fail at each severity. */
-export function countFailures(checks: readonly CheckResultView[]): Record<CheckResultView["severity"], number> {
+export function countFailures(
+  checks: readonly CheckResultView[],
+): Record<CheckResultView["severity"], number> {
   const out = { error: 0, warning: 0, note: 0 };
   for (const c of checks) if (!c.passed) out[c.severity] += 1;
   return out;

@@ -13,13 +13,23 @@ import { isNumericKind, optionsOf, type ParameterSpecView } from "./parameter-sp
 const SLACK = 1e-9;
 
 /** A limit shown in the user's units: mm to 3 decimals, inches to 4 (as the engine's messages). */
-function shownLimit(spec: ParameterSpecView, value: number, templateUnits: LengthUnit, userUnits: LengthUnit): string {
-  if (spec.kind === "length") return formatNumber(convertLength(value, templateUnits, userUnits), userUnits === "in" ? 4 : 3);
+function shownLimit(
+  spec: ParameterSpecView,
+  value: number,
+  templateUnits: LengthUnit,
+  userUnits: LengthUnit,
+): string {
+  if (spec.kind === "length")
+    return formatNumber(convertLength(value, templateUnits, userUnits), userUnits === "in" ? 4 : 3);
   return formatNumber(value, 6);
 }
 
 /** "20–250 mm", "0.7874–9.8425 in", "0–90°", "5–400 N", "1–6". */
-export function rangeText(spec: ParameterSpecView, templateUnits: LengthUnit, userUnits: LengthUnit): string | null {
+export function rangeText(
+  spec: ParameterSpecView,
+  templateUnits: LengthUnit,
+  userUnits: LengthUnit,
+): string | null {
   if (spec.min === undefined || spec.max === undefined) return null;
   const unit = fieldUnit(spec, userUnits);
   const lo = shownLimit(spec, spec.min, templateUnits, userUnits);
@@ -37,15 +47,20 @@ export function numericProblem(
 ): string | null {
   const text = state.values[spec.key];
   const range = rangeText(spec, templateUnits, userUnits);
-  if (typeof text !== "string" || text.trim() === "") return `${spec.label}: enter a number${range ? ` from ${range}` : ""}.`;
+  if (typeof text !== "string" || text.trim() === "")
+    return `${spec.label}: enter a number${range ? ` from ${range}` : ""}.`;
   const value = numericValue(spec, state, userUnits);
-  if (value === null) return `${spec.label} must be a number${range ? ` from ${range}` : ""}; "${text.trim()}" is not one.`;
-  if (spec.kind === "count" && !Number.isInteger(value)) return `${spec.label} must be a whole number${range ? ` from ${range}` : ""}.`;
+  if (value === null)
+    return `${spec.label} must be a number${range ? ` from ${range}` : ""}; "${text.trim()}" is not one.`;
+  if (spec.kind === "count" && !Number.isInteger(value))
+    return `${spec.label} must be a whole number${range ? ` from ${range}` : ""}.`;
   if (spec.min === undefined || spec.max === undefined) return null;
   const inTemplate = spec.kind === "length" ? convertLength(value, userUnits, templateUnits) : value;
   const slack = SLACK * Math.max(1, Math.abs(spec.min), Math.abs(spec.max));
-  if (inTemplate < spec.min - slack) return `${spec.label} must be at least ${shownLimit(spec, spec.min, templateUnits, userUnits)}${unitSuffix(spec, userUnits)} (allowed ${range}).`;
-  if (inTemplate > spec.max + slack) return `${spec.label} must be at most ${shownLimit(spec, spec.max, templateUnits, userUnits)}${unitSuffix(spec, userUnits)} (allowed ${range}).`;
+  if (inTemplate < spec.min - slack)
+    return `${spec.label} must be at least ${shownLimit(spec, spec.min, templateUnits, userUnits)}${unitSuffix(spec, userUnits)} (allowed ${range}).`;
+  if (inTemplate > spec.max + slack)
+    return `${spec.label} must be at most ${shownLimit(spec, spec.max, templateUnits, userUnits)}${unitSuffix(spec, userUnits)} (allowed ${range}).`;
   return null;
 }
 
@@ -71,7 +86,12 @@ export function buildFormSchema(
       shape[spec.key] = z.boolean();
     } else if (isNumericKind(spec.kind)) {
       shape[spec.key] = z.string().superRefine((text, ctx) => {
-        const problem = numericProblem(spec, { values: { [spec.key]: text }, exact: getExact() }, templateUnits, userUnits);
+        const problem = numericProblem(
+          spec,
+          { values: { [spec.key]: text }, exact: getExact() },
+          templateUnits,
+          userUnits,
+        );
         if (problem) ctx.addIssue({ code: "custom", message: problem });
       });
     } else {

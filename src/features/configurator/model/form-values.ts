@@ -90,7 +90,12 @@ export function formStateFromTemplateValues(
  * Switches every length field from `from` to `to` in place. Lengths that do not parse are left as typed
  * (the field keeps its message); everything else is unchanged.
  */
-export function convertFormState(specs: readonly ParameterSpecView[], state: FormState, from: LengthUnit, to: LengthUnit): FormState {
+export function convertFormState(
+  specs: readonly ParameterSpecView[],
+  state: FormState,
+  from: LengthUnit,
+  to: LengthUnit,
+): FormState {
   if (from === to) return state;
   const values: FormValues = { ...state.values };
   const exact: ExactLengths = {};

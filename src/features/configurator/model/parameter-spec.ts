@@ -37,7 +37,10 @@ export interface Option {
 }
 
 /** Choices of a choice parameter, or the materials of a material parameter, as value/label pairs. */
-export function optionsOf(spec: ParameterSpecView, materialNames: Readonly<Record<string, string>> = {}): Option[] {
+export function optionsOf(
+  spec: ParameterSpecView,
+  materialNames: Readonly<Record<string, string>> = {},
+): Option[] {
   if (spec.kind === "choice") {
     return (spec.choices ?? []).map((c) => (typeof c === "string" ? { value: c, label: c } : c));
   }
@@ -50,7 +53,9 @@ export function optionsOf(spec: ParameterSpecView, materialNames: Readonly<Recor
 }
 
 /** The parameters in their groups, in the order the template lists them (a group appears where its first parameter does). */
-export function groupParameters(specs: readonly ParameterSpecView[]): Array<{ name: string; parameters: ParameterSpecView[] }> {
+export function groupParameters(
+  specs: readonly ParameterSpecView[],
+): Array<{ name: string; parameters: ParameterSpecView[] }> {
   const groups: Array<{ name: string; parameters: ParameterSpecView[] }> = [];
   const byName = new Map<string, ParameterSpecView[]>();
   for (const spec of specs) {

@@ -13,7 +13,10 @@ export interface UrlConfiguration {
 }
 
 /** Reads what the address holds; values that do not fit their parameter are left out (the default is used). */
-export function readUrlConfiguration(params: URLSearchParams, specs: readonly ParameterSpecView[]): UrlConfiguration {
+export function readUrlConfiguration(
+  params: URLSearchParams,
+  specs: readonly ParameterSpecView[],
+): UrlConfiguration {
   const unitsText = params.get("units");
   const units: LengthUnit | null = unitsText === "mm" || unitsText === "in" ? unitsText : null;
   const values: Record<string, ParameterValue> = {};

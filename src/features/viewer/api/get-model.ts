@@ -7,7 +7,8 @@ import { decodeModel, modelResponseSchema, type PreviewModel } from "./model-sch
 export const modelKeys = {
   all: ["templates", "model"] as const,
   defaults: (id: string) => ["templates", "model", id, "defaults"] as const,
-  configured: (id: string, units: LengthUnit, parameters: unknown) => ["templates", "model", id, units, parameters] as const,
+  configured: (id: string, units: LengthUnit, parameters: unknown) =>
+    ["templates", "model", id, units, parameters] as const,
 };
 
 /** `POST /api/templates/:id/model` with `{ parameters, units }`: the triangulated parts of one configuration. */
@@ -16,20 +17,34 @@ export async function getModel(
   request: { parameters: Record<string, ParameterValue>; units: LengthUnit },
   signal?: AbortSignal,
 ): Promise<PreviewModel> {
-  const data = await api.post(`/api/templates/${encodeURIComponent(id)}/model`, { body: request, schema: modelResponseSchema, signal });
+  const data = await api.post(`/api/templates/${encodeURIComponent(id)}/model`, {
+    body: request,
+    schema: modelResponseSchema,
+    signal,
+  });
   return decodeModel(data);
 }
 
 /** `GET /api/templates/:id/model`: the template at its defaults (catalogue pictures). */
 export async function getDefaultModel(id: string, signal?: AbortSignal): Promise<PreviewModel> {
-  return decodeModel(await api.get(`/api/templates/${encodeURIComponent(id)}/model`, { schema: modelResponseSchema, signal }));
+  return decodeModel(
+    await api.get(`/api/templates/${encodeURIComponent(id)}/model`, { schema: modelResponseSchema, signal }),
+  );
 }
 
 export const defaultModelQueryOptions = (id: string) =>
-  queryOptions({ queryKey: modelKeys.defaults(id), queryFn: ({ signal }) => getDefaultModel(id, signal), staleTime: Infinity, retry: false });
+  queryOptions({
+    queryKey: modelKeys.defaults(id),
+    queryFn: ({ signal }) => getDefaultModel(id, signal),
+    staleTime: Infinity,
+    retry: false,
+  });
 
 /** The model for a settled configuration; the previous one stays in `data` while the next is built. */
-export function useModel(id: string, request: { parameters: Record<string, ParameterValue>; units: LengthUnit } | null) {
+export function useModel(
+  id: string,
+  request: { parameters: Record<string, ParameterValue>; units: LengthUnit } | null,
+) {
   return useQuery({
     queryKey: modelKeys.configured(id, request?.units ?? "mm", request?.parameters ?? null),
     queryFn: ({ signal }) => getModel(id, request!, signal),

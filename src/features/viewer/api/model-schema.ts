@@ -16,7 +16,12 @@ const partSchema = z.object({
   materialName: z.string().optional(),
   colour: z.string().optional(),
   color: z.string().optional(),
-  mesh: z.object({ positions: numbers, normals: numbers.optional(), indices: numbers, edges: numbers.optional() }),
+  mesh: z.object({
+    positions: numbers,
+    normals: numbers.optional(),
+    indices: numbers,
+    edges: numbers.optional(),
+  }),
   assembly: matrix.optional(),
   exploded: matrix.optional(),
 });
@@ -67,8 +72,10 @@ function bytesOf(base64: string): ArrayBuffer {
   return bytes.buffer;
 }
 
-const floats = (v: number[] | string) => (typeof v === "string" ? new Float32Array(bytesOf(v)) : Float32Array.from(v));
-const uints = (v: number[] | string) => (typeof v === "string" ? new Uint32Array(bytesOf(v)) : Uint32Array.from(v));
+const floats = (v: number[] | string) =>
+  typeof v === "string" ? new Float32Array(bytesOf(v)) : Float32Array.from(v);
+const uints = (v: number[] | string) =>
+  typeof v === "string" ? new Uint32Array(bytesOf(v)) : Uint32Array.from(v);
 
 /** Steel-grey for a part whose colour the server did not give. */
 const fallbackColour = "#9aa5ae";
@@ -87,6 +94,11 @@ export function decodeModel(response: ModelResponse): PreviewModel {
       assembly: p.assembly ?? IDENTITY,
       exploded: p.exploded ?? p.assembly ?? IDENTITY,
     })),
-    fixtures: response.fixtures.map((f) => ({ id: f.id, label: f.label ?? f.id, positionMm: f.positionMm, sizeMm: f.sizeMm })),
+    fixtures: response.fixtures.map((f) => ({
+      id: f.id,
+      label: f.label ?? f.id,
+      positionMm: f.positionMm,
+      sizeMm: f.sizeMm,
+    })),
   };
 }

@@ -4,11 +4,19 @@ import { useThree } from "@react-three/fiber";
 import { Box3, type Group, type PerspectiveCamera, Vector3 } from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import type { PreviewFixture, PreviewModel, PreviewPart } from "../api/model-schema";
-import { edgeGeometry, fitCamera, fixtureCentre, matrixOf, viewDirections, type ViewName } from "../scene/geometry";
+import {
+  edgeGeometry,
+  fitCamera,
+  fixtureCentre,
+  matrixOf,
+  viewDirections,
+  type ViewName,
+} from "../scene/geometry";
 import { partGeometry } from "../scene/geometry";
 
 /** A request to move the camera: fit the visible parts from a view (or the current direction), or turn about the up axis. */
-export type CameraCommand = { id: number; kind: "fit"; view?: ViewName } | { id: number; kind: "turn"; degrees: number };
+export type CameraCommand =
+  { id: number; kind: "fit"; view?: ViewName } | { id: number; kind: "turn"; degrees: number };
 
 function PartMesh({ part, exploded }: { part: PreviewPart; exploded: boolean }) {
   const geometry = useMemo(() => partGeometry(part), [part]);
@@ -24,7 +32,14 @@ function PartMesh({ part, exploded }: { part: PreviewPart; exploded: boolean }) 
   return (
     <group matrixAutoUpdate={false} matrix={matrix} name={part.id}>
       <mesh geometry={geometry}>
-        <meshStandardMaterial color={part.colour} metalness={0.35} roughness={0.5} polygonOffset polygonOffsetFactor={1} polygonOffsetUnits={1} />
+        <meshStandardMaterial
+          color={part.colour}
+          metalness={0.35}
+          roughness={0.5}
+          polygonOffset
+          polygonOffsetFactor={1}
+          polygonOffsetUnits={1}
+        />
       </mesh>
       {edges ? (
         <lineSegments geometry={edges}>
@@ -83,7 +98,9 @@ export function ModelScene({
     } else {
       group.current.updateMatrixWorld(true);
       const box = new Box3().setFromObject(group.current);
-      const direction = command.view ? viewDirections[command.view] : camera.position.clone().sub(target).normalize();
+      const direction = command.view
+        ? viewDirections[command.view]
+        : camera.position.clone().sub(target).normalize();
       const centre = fitCamera(camera, box, direction.lengthSq() > 0 ? direction : viewDirections.iso);
       if (centre) target.copy(centre);
     }

@@ -38,9 +38,7 @@ class CanvasBoundary extends Component<{ children: ReactNode }, { failed: boolea
 function NoWebGl({ reason }: { reason: string }) {
   return (
     <div className="flex h-full items-center justify-center p-6 text-center text-steel-700">
-      <p>
-        {reason} The checks, figures and downloads below do not need it.
-      </p>
+      <p>{reason} The checks, figures and downloads below do not need it.</p>
     </div>
   );
 }
@@ -57,7 +55,8 @@ export default function ModelViewer({ templateId, request }: ModelViewerProps) {
   const [showFixture, setShowFixture] = useState(true);
   const [command, setCommand] = useState<CameraCommand>({ id: 0, kind: "fit", view: "iso" });
   const next = useRef(1);
-  const send = (c: { kind: "fit"; view?: ViewName } | { kind: "turn"; degrees: number }) => setCommand({ ...c, id: next.current++ });
+  const send = (c: { kind: "fit"; view?: ViewName } | { kind: "turn"; degrees: number }) =>
+    setCommand({ ...c, id: next.current++ });
 
   // The first model that arrives is fitted to the view; later ones keep the person's camera.
   const firstFit = useRef(false);
@@ -82,7 +81,15 @@ export default function ModelViewer({ templateId, request }: ModelViewerProps) {
   const shownPart = onlyPart && parts.some((p) => p.id === onlyPart) ? onlyPart : null;
   const hasFixture = (data?.fixtures.length ?? 0) > 0;
 
-  const status = !request ? null : model.isError ? "error" : model.isFetching ? "updating" : data ? "current" : "loading";
+  const status = !request
+    ? null
+    : model.isError
+      ? "error"
+      : model.isFetching
+        ? "updating"
+        : data
+          ? "current"
+          : "loading";
 
   return (
     <PreviewFrame
@@ -103,24 +110,54 @@ export default function ModelViewer({ templateId, request }: ModelViewerProps) {
           </button>
           <div className="inline-flex gap-1" role="group" aria-label="View from">
             {views.map((v) => (
-              <button key={v.view} type="button" className={toolButton} disabled={!data} onClick={() => send({ kind: "fit", view: v.view })}>
+              <button
+                key={v.view}
+                type="button"
+                className={toolButton}
+                disabled={!data}
+                onClick={() => send({ kind: "fit", view: v.view })}
+              >
                 {v.label}
               </button>
             ))}
           </div>
           <div className="inline-flex gap-1" role="group" aria-label="Turn">
-            <button type="button" className={toolButton} disabled={!data} onClick={() => send({ kind: "turn", degrees: -30 })} aria-label="Turn left 30°">
+            <button
+              type="button"
+              className={toolButton}
+              disabled={!data}
+              onClick={() => send({ kind: "turn", degrees: -30 })}
+              aria-label="Turn left 30°"
+            >
               ⟲
             </button>
-            <button type="button" className={toolButton} disabled={!data} onClick={() => send({ kind: "turn", degrees: 30 })} aria-label="Turn right 30°">
+            <button
+              type="button"
+              className={toolButton}
+              disabled={!data}
+              onClick={() => send({ kind: "turn", degrees: 30 })}
+              aria-label="Turn right 30°"
+            >
               ⟳
             </button>
           </div>
-          <button type="button" className={toolButton} aria-pressed={exploded} disabled={!data || parts.length < 2} onClick={() => setExploded((e) => !e)}>
+          <button
+            type="button"
+            className={toolButton}
+            aria-pressed={exploded}
+            disabled={!data || parts.length < 2}
+            onClick={() => setExploded((e) => !e)}
+          >
             Exploded
           </button>
           {hasFixture ? (
-            <button type="button" className={toolButton} aria-pressed={showFixture} disabled={!data || shownPart !== null} onClick={() => setShowFixture((s) => !s)}>
+            <button
+              type="button"
+              className={toolButton}
+              aria-pressed={showFixture}
+              disabled={!data || shownPart !== null}
+              onClick={() => setShowFixture((s) => !s)}
+            >
               Vise jaw
             </button>
           ) : null}
@@ -155,11 +192,22 @@ export default function ModelViewer({ templateId, request }: ModelViewerProps) {
             role="img"
             data-testid="model-canvas"
           >
-            <ModelScene model={data} exploded={exploded} onlyPart={shownPart} showFixture={showFixture} command={command} />
+            <ModelScene
+              model={data}
+              exploded={exploded}
+              onlyPart={shownPart}
+              showFixture={showFixture}
+              command={command}
+            />
           </Canvas>
         </CanvasBoundary>
       ) : (
-        <div className={cn("flex h-full items-center justify-center", status === "error" ? "p-6 text-center" : "")}>
+        <div
+          className={cn(
+            "flex h-full items-center justify-center",
+            status === "error" ? "p-6 text-center" : "",
+          )}
+        >
           {status === "error" ? (
             <p className="text-fault-700">The model could not be built: {model.error?.message}</p>
           ) : request ? (

@@ -14,9 +14,12 @@ function useNearScreen<T extends Element>() {
       setNear(true);
       return;
     }
-    const observer = new IntersectionObserver((entries) => {
-      if (entries.some((e) => e.isIntersecting)) setNear(true);
-    }, { rootMargin: "200px" });
+    const observer = new IntersectionObserver(
+      (entries) => {
+        if (entries.some((e) => e.isIntersecting)) setNear(true);
+      },
+      { rootMargin: "200px" },
+    );
     observer.observe(el);
     return () => observer.disconnect();
   }, [near]);
@@ -42,9 +45,16 @@ export function PartPicture({ templateId, templateName }: { templateId: string; 
   });
 
   return (
-    <div ref={ref} className="relative aspect-[8/5] w-full overflow-hidden bg-gradient-to-b from-steel-50 to-steel-200">
+    <div
+      ref={ref}
+      className="relative aspect-[8/5] w-full overflow-hidden bg-gradient-to-b from-steel-50 to-steel-200"
+    >
       {picture.data ? (
-        <img src={picture.data} alt={`${templateName}, drawn from its model at the default sizes`} className="size-full object-contain" />
+        <img
+          src={picture.data}
+          alt={`${templateName}, drawn from its model at the default sizes`}
+          className="size-full object-contain"
+        />
       ) : model.isError || picture.isError ? (
         <div className="flex size-full items-center justify-center p-4 text-center text-sm text-steel-700">
           <p>No picture: {model.isError ? model.error.message : "this browser cannot draw the model."}</p>

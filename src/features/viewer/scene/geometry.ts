@@ -1,11 +1,20 @@
-import { BufferAttribute, BufferGeometry, Matrix4, Vector3, Box3, Sphere, type PerspectiveCamera } from "three";
+import {
+  BufferAttribute,
+  BufferGeometry,
+  Matrix4,
+  Vector3,
+  Box3,
+  Sphere,
+  type PerspectiveCamera,
+} from "three";
 import type { PreviewFixture, PreviewPart } from "../api/model-schema";
 
 /** A part's triangles as a three.js geometry (normals computed when the server sent none). */
 export function partGeometry(part: PreviewPart): BufferGeometry {
   const g = new BufferGeometry();
   g.setAttribute("position", new BufferAttribute(part.positions, 3));
-  if (part.normals && part.normals.length === part.positions.length) g.setAttribute("normal", new BufferAttribute(part.normals, 3));
+  if (part.normals && part.normals.length === part.positions.length)
+    g.setAttribute("normal", new BufferAttribute(part.normals, 3));
   g.setIndex(new BufferAttribute(part.indices, 1));
   if (!g.getAttribute("normal")) g.computeVertexNormals();
   g.computeBoundingSphere();
@@ -40,7 +49,12 @@ export type ViewName = keyof typeof viewDirections;
  * Places a perspective camera so the box fills the view from `direction`, whatever the canvas shape:
  * distance = radius / sin(half the narrower field of view), plus a margin.
  */
-export function fitCamera(camera: PerspectiveCamera, box: Box3, direction: Vector3, margin = 1.12): Vector3 | null {
+export function fitCamera(
+  camera: PerspectiveCamera,
+  box: Box3,
+  direction: Vector3,
+  margin = 1.12,
+): Vector3 | null {
   if (box.isEmpty()) return null;
   const sphere = box.getBoundingSphere(new Sphere());
   const vertical = (camera.fov * Math.PI) / 180;

@@ -20,7 +20,14 @@ import {
   WebGLRenderer,
 } from "three";
 import type { PreviewModel } from "../api/model-schema";
-import { edgeGeometry, fitCamera, fixtureCentre, matrixOf, partGeometry, viewDirections } from "../scene/geometry";
+import {
+  edgeGeometry,
+  fitCamera,
+  fixtureCentre,
+  matrixOf,
+  partGeometry,
+  viewDirections,
+} from "../scene/geometry";
 
 export const thumbnailSize = { width: 480, height: 300 } as const;
 
@@ -55,7 +62,14 @@ function draw(model: PreviewModel): string {
     holder.matrixAutoUpdate = false;
     holder.matrix.copy(matrixOf(part.assembly));
     const geometry = partGeometry(part);
-    const material = new MeshStandardMaterial({ color: new Color(part.colour), metalness: 0.35, roughness: 0.5, polygonOffset: true, polygonOffsetFactor: 1, polygonOffsetUnits: 1 });
+    const material = new MeshStandardMaterial({
+      color: new Color(part.colour),
+      metalness: 0.35,
+      roughness: 0.5,
+      polygonOffset: true,
+      polygonOffsetFactor: 1,
+      polygonOffsetUnits: 1,
+    });
     holder.add(new Mesh(geometry, material));
     disposables.push(geometry, material);
     const edges = edgeGeometry(part);
@@ -72,7 +86,12 @@ function draw(model: PreviewModel): string {
 
   for (const f of model.fixtures) {
     const box = new BoxGeometry(f.sizeMm.x, f.sizeMm.y, f.sizeMm.z);
-    const material = new MeshStandardMaterial({ color: 0x7d93a8, transparent: true, opacity: 0.18, depthWrite: false });
+    const material = new MeshStandardMaterial({
+      color: 0x7d93a8,
+      transparent: true,
+      opacity: 0.18,
+      depthWrite: false,
+    });
     const mesh = new Mesh(box, material);
     mesh.position.set(...fixtureCentre(f));
     const outline = new EdgesGeometry(box);
