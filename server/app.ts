@@ -19,6 +19,9 @@ import { adminService } from "@server/modules/admin/service";
 import { adminRouter } from "@server/modules/admin/router";
 import { machinesRouter, visesRouter } from "@server/modules/profiles/router";
 import { createDesignService, designsRouter, fixedCatalogue, sharedRouter, type TemplateCatalogue } from "@server/modules/designs";
+import { templatesRouter, templatesService } from "@server/modules/templates";
+import { calculatorsRouter, calculatorsService } from "@server/modules/calculators";
+import { builtInTemplates, type TemplateStore } from "@server/templates";
 
 /**
  * Everything the app needs from outside, passed in (tests pass a test database and a silent logger).
@@ -33,6 +36,8 @@ export interface AppDeps {
   healthTimeoutMs?: number;
   /** Which templates exist and their current versions, for saved designs (tests pass their own). */
   templateCatalogue?: TemplateCatalogue;
+  /** The compiled template catalogue (defaults to the built-in templates, loaded once; a broken one fails start-up). */
+  templates?: TemplateStore;
 }
 
 /** JSON bodies above this are refused with 413. Routes taking uploads set their own limit. */
@@ -97,6 +102,8 @@ export function createApp(deps: AppDeps): express.Express {
   const designs = createDesignService(db.models, deps.templateCatalogue ?? fixedCatalogue([]));
   app.use("/api/designs", designsRouter(designs));
   app.use("/api/shared", sharedRouter(designs));
+  app.use("/api/templates", templatesRouter(templatesService(deps.templates ?? builtInTemplates())));
+  app.use("/api/calculators", calculatorsRouter(calculatorsService()));
   // --- end feature routers ---
 
   app.use("/api", notFoundHandler);

@@ -1,0 +1,2 @@
+export { calculatorsRouter } from "./router";
+export { calculatorsService, type CalculatorsService, type CalculatorDto } from "./service";

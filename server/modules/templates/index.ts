@@ -1,0 +1,2 @@
+export { templatesRouter } from "./router";
+export { templatesService, type TemplatesService, type EvaluationDto, type TemplateSummaryDto } from "./service";

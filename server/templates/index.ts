@@ -1,0 +1,1 @@
+export { builtInTemplates, loadTemplateStore, defaultTemplatesDir, CatalogueLoadError, type TemplateStore } from "./catalogue";
