@@ -22,7 +22,7 @@ export function axisVector(a: Axis): Vec3 {
 /** The unit vector of a direction such as "-z". */
 export function directionVector(d: Direction): Vec3 {
   const v = axisVector(d[1] as Axis);
-  return d[0] === "-" ? scale(v, -1) : v;
+  return d[0] === "-" ? (v.map((c) => (c === 0 ? 0 : -c)) as Vec3) : v;
 }
 
 export const directionAxis = (d: Direction): Axis => d[1] as Axis;

@@ -33,7 +33,10 @@ export function createKernelPool(config: Partial<KernelConfig> = {}, logger: Ker
     extraTaskModules: cfg.extraTaskModules,
   };
 
+  /** Workers past the heap limit: no new work; terminated once idle. */
   const retiring = new Set<number>();
+  /** Workers being terminated: still listed by piscina until their exit, so the balancer must skip them. */
+  const stopping = new Set<number>();
   const ifaces = new Map<number, WorkerIface>();
   const stats: KernelPoolStats = { size, warmed: 0, retired: 0, timedOut: 0, crashed: 0, completed: 0, queued: 0 };
   let closed = false;
@@ -54,7 +57,7 @@ export function createKernelPool(config: Partial<KernelConfig> = {}, logger: Ker
     workerData,
     loadBalancer: (_task, workers) => {
       for (const w of workers as unknown as WorkerIface[]) {
-        if (!retiring.has(w.id) && w.currentUsage === 0) return w as never;
+        if (!retiring.has(w.id) && !stopping.has(w.id) && w.currentUsage === 0) return w as never;
       }
       return null;
     },
@@ -64,6 +67,7 @@ export function createKernelPool(config: Partial<KernelConfig> = {}, logger: Ker
   piscina.on("workerDestroy", (w: WorkerIface) => {
     ifaces.delete(w.id);
     retiring.delete(w.id);
+    stopping.delete(w.id);
   });
   piscina.on("message", (m: WorkerReadyMessage) => {
     if (m?.type !== "jigwright-kernel-ready") return;
@@ -82,6 +86,7 @@ export function createKernelPool(config: Partial<KernelConfig> = {}, logger: Ker
       const worker = piscina.threads.find((t) => t.threadId === id);
       retiring.delete(id);
       if (worker) {
+        stopping.add(id);
         stats.retired++;
         logger.info({ threadId: id }, "kernel worker retired (heap limit)");
         void worker.terminate();

@@ -1,4 +1,4 @@
-import { pathToFileURL } from "node:url";
+import { createRequire } from "node:module";
 import { createKernelContext, PartShapeCache, type KernelContext } from "./context";
 import { KernelError } from "./errors";
 import { describeKernelException, loadKernel, type LoadedKernel } from "./oc";
@@ -28,8 +28,10 @@ export class TaskRunner {
     const kernel = await loadKernel();
     const tasks = new Map<string, KernelTask<unknown, unknown>>();
     for (const t of kernelTasks as KernelTask<unknown, unknown>[]) tasks.set(t.name, t);
+    // require, not import(): inside a worker thread on Node 20 only tsx's require hook is active.
+    const requireModule = createRequire(import.meta.url);
     for (const file of options.extraTaskModules) {
-      const mod = (await import(pathToFileURL(file).href)) as { tasks?: KernelTask<unknown, unknown>[] };
+      const mod = requireModule(file) as { tasks?: KernelTask<unknown, unknown>[] };
       for (const t of mod.tasks ?? []) tasks.set(t.name, t);
     }
     const cache = new PartShapeCache(options.partCacheEntries);
