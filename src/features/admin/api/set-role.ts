@@ -10,7 +10,10 @@ export interface SetRoleInput {
 
 /** `PATCH /api/admin/users/:id/role`; the server refuses (409) to demote the last admin. */
 export async function setRole({ userId, role }: SetRoleInput): Promise<PublicUser> {
-  const data = await api.patch(`/api/admin/users/${userId}/role`, { body: { role }, schema: userResponseSchema });
+  const data = await api.patch(`/api/admin/users/${userId}/role`, {
+    body: { role },
+    schema: userResponseSchema,
+  });
   return data.user;
 }
 

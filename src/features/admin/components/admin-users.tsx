@@ -24,8 +24,13 @@ export function AdminUsers({ currentUserId }: { currentUserId: number | undefine
       setRole.mutate(
         { userId: user.id, role },
         {
-          onSuccess: (updated) => setOutcome({ tone: "holds", text: `${updated.displayName} is now ${updated.role}.` }),
-          onError: (error) => setOutcome({ tone: "fault", text: `${user.displayName} keeps the ${user.role} role: ${error.message}` }),
+          onSuccess: (updated) =>
+            setOutcome({ tone: "holds", text: `${updated.displayName} is now ${updated.role}.` }),
+          onError: (error) =>
+            setOutcome({
+              tone: "fault",
+              text: `${user.displayName} keeps the ${user.role} role: ${error.message}`,
+            }),
           onSettled: () => setPendingUserId(null),
         },
       );
@@ -47,7 +52,12 @@ export function AdminUsers({ currentUserId }: { currentUserId: number | undefine
           </Notice>
         ) : null}
         {users.data ? (
-          <UsersTable users={users.data} currentUserId={currentUserId} pendingUserId={pendingUserId} onRoleChange={onRoleChange} />
+          <UsersTable
+            users={users.data}
+            currentUserId={currentUserId}
+            pendingUserId={pendingUserId}
+            onRoleChange={onRoleChange}
+          />
         ) : null}
       </section>
       <aside aria-labelledby="roles-heading" className="space-y-3">

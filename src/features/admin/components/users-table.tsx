@@ -33,17 +33,25 @@ export function UsersTable({
   const [filter, setFilter] = useState("");
   const columns = useMemo(
     () => [
-      column.accessor("id", { header: "No.", cell: (c) => <span className="figure text-steel-600">{c.getValue()}</span> }),
+      column.accessor("id", {
+        header: "No.",
+        cell: (c) => <span className="figure text-steel-600">{c.getValue()}</span>,
+      }),
       column.accessor("displayName", {
         header: "Name",
         cell: (c) => (
           <span className="font-semibold">
             {c.getValue()}
-            {c.row.original.id === currentUserId ? <span className="ml-2 text-sm font-normal text-steel-600">(you)</span> : null}
+            {c.row.original.id === currentUserId ? (
+              <span className="ml-2 text-sm font-normal text-steel-600">(you)</span>
+            ) : null}
           </span>
         ),
       }),
-      column.accessor("email", { header: "E-mail", cell: (c) => <span className="break-all">{c.getValue()}</span> }),
+      column.accessor("email", {
+        header: "E-mail",
+        cell: (c) => <span className="break-all">{c.getValue()}</span>,
+      }),
       column.accessor("role", {
         header: "Role",
         cell: (c) => (
@@ -120,7 +128,11 @@ export function UsersTable({
           </thead>
           <tbody>
             {rows.map((row) => (
-              <tr key={row.id} data-user-email={row.original.email} className="border-t border-steel-200 hover:bg-steel-50">
+              <tr
+                key={row.id}
+                data-user-email={row.original.email}
+                className="border-t border-steel-200 hover:bg-steel-50"
+              >
                 {row.getVisibleCells().map((cell) => (
                   <td key={cell.id} className="px-3 py-2 align-middle">
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
@@ -130,7 +142,9 @@ export function UsersTable({
             ))}
           </tbody>
         </table>
-        {rows.length === 0 ? <p className="px-3 py-6 text-center text-steel-600">No account matches “{filter}”.</p> : null}
+        {rows.length === 0 ? (
+          <p className="px-3 py-6 text-center text-steel-600">No account matches “{filter}”.</p>
+        ) : null}
       </div>
     </div>
   );

@@ -42,7 +42,11 @@ export function RegisterForm({ onRegistered }: { onRegistered: (user: PublicUser
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label="Create account">
-      {formError ? <Notice tone="fault" title="Account not created">{formError}</Notice> : null}
+      {formError ? (
+        <Notice tone="fault" title="Account not created">
+          {formError}
+        </Notice>
+      ) : null}
       <TextField
         label="Your name"
         hint="Shown in the header and on designs you share."
@@ -50,7 +54,13 @@ export function RegisterForm({ onRegistered }: { onRegistered: (user: PublicUser
         error={errors.displayName?.message}
         {...form.register("displayName")}
       />
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
       <TextField
         label="Password"
         type={showPassword ? "text" : "password"}

@@ -8,7 +8,9 @@ import { SignInForm } from "./sign-in-form";
 
 function renderForm(onSignedIn = vi.fn()) {
   // A fresh client per test, no retries (TanStack Query testing guide).
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const queryClient = new QueryClient({
+    defaultOptions: { queries: { retry: false }, mutations: { retry: false } },
+  });
   render(
     <QueryClientProvider client={queryClient}>
       <MemoryRouter>
@@ -24,7 +26,9 @@ const reply = (status: number, body: unknown, headers: Record<string, string> = 
 
 /** Answers the CSRF request, then `login` for the sign-in POST. */
 function serverAnswers(login: () => Response) {
-  const fetchMock = vi.fn(async (url: string) => (url === "/api/auth/csrf" ? reply(200, { csrfToken: "t" }) : login()));
+  const fetchMock = vi.fn(async (url: string) =>
+    url === "/api/auth/csrf" ? reply(200, { csrfToken: "t" }) : login(),
+  );
   vi.stubGlobal("fetch", fetchMock);
   return fetchMock;
 }
@@ -79,7 +83,11 @@ describe("sign-in form", () => {
 
   it("explains rate limiting with the wait from Retry-After", async () => {
     serverAnswers(() =>
-      reply(429, { error: { code: "rate_limited", message: "Too many attempts.", details: [] } }, { "retry-after": "600" }),
+      reply(
+        429,
+        { error: { code: "rate_limited", message: "Too many attempts.", details: [] } },
+        { "retry-after": "600" },
+      ),
     );
     renderForm();
     await userEvent.type(screen.getByLabelText("E-mail"), "a@b.org");
@@ -91,7 +99,11 @@ describe("sign-in form", () => {
   it("puts the server's field errors on the fields", async () => {
     serverAnswers(() =>
       reply(400, {
-        error: { code: "validation_error", message: "Check the fields.", details: [{ path: "email", message: "This address is not accepted here." }] },
+        error: {
+          code: "validation_error",
+          message: "Check the fields.",
+          details: [{ path: "email", message: "This address is not accepted here." }],
+        },
       }),
     );
     renderForm();
@@ -104,14 +116,23 @@ describe("sign-in form", () => {
   });
 
   it("hands the signed-in user on, after sending the CSRF header", async () => {
-    const user = { id: 7, email: "a@b.org", displayName: "Ada", role: "machinist", createdAt: "2026-01-01T00:00:00.000Z" };
+    const user = {
+      id: 7,
+      email: "a@b.org",
+      displayName: "Ada",
+      role: "machinist",
+      createdAt: "2026-01-01T00:00:00.000Z",
+    };
     const fetchMock = serverAnswers(() => reply(200, { user }));
     const onSignedIn = renderForm();
     await userEvent.type(screen.getByLabelText("E-mail"), "  A@B.org ");
     await userEvent.type(screen.getByLabelText("Password"), "right password");
     await userEvent.click(screen.getByRole("button", { name: "Sign in" }));
     await waitFor(() => expect(onSignedIn).toHaveBeenCalledWith(user));
-    const loginCall = fetchMock.mock.calls.find(([url]) => url === "/api/auth/login") as unknown as [string, RequestInit];
+    const loginCall = fetchMock.mock.calls.find(([url]) => url === "/api/auth/login") as unknown as [
+      string,
+      RequestInit,
+    ];
     expect((loginCall[1].headers as Record<string, string>)["x-csrf-token"]).toBe("t");
     // The shared schema trims and lower-cases the address before it is sent.
     expect(JSON.parse(loginCall[1].body as string)).toEqual({ email: "a@b.org", password: "right password" });

@@ -17,7 +17,10 @@ const fields = ["email", "password"] as const;
 export function SignInForm({ onSignedIn }: { onSignedIn: (user: PublicUser) => void }) {
   const signIn = useSignIn();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<LoginBody>({ resolver: zodResolver(loginBodySchema), defaultValues: { email: "", password: "" } });
+  const form = useForm<LoginBody>({
+    resolver: zodResolver(loginBodySchema),
+    defaultValues: { email: "", password: "" },
+  });
   const { errors, isSubmitting } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -32,8 +35,18 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: PublicUser) => v
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label="Sign in">
-      {formError ? <Notice tone="fault" title="Not signed in">{formError}</Notice> : null}
-      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+      {formError ? (
+        <Notice tone="fault" title="Not signed in">
+          {formError}
+        </Notice>
+      ) : null}
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
       <TextField
         label="Password"
         type="password"

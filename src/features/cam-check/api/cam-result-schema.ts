@@ -48,7 +48,11 @@ export const camResultSchema = z.object({
   ratioDiameterToEccentricity: z.number(),
   contactOnlyMinRatio: z.number().nullable(),
   maxSelfLockingEccentricityMm: z.number(),
-  armsAtEngagement: z.object({ drivingMm: z.number(), contactFrictionMm: z.number(), pivotFrictionMm: z.number() }),
+  armsAtEngagement: z.object({
+    drivingMm: z.number(),
+    contactFrictionMm: z.number(),
+    pivotFrictionMm: z.number(),
+  }),
   leverAngleDeg: z.number(),
   leverEndAngleDeg: z.number(),
   leverReleasedAngleDeg: z.number(),

@@ -9,11 +9,36 @@ export function CamFigures({ result, system }: { result: CamResult; system: Unit
   return (
     <FigureList
       items={[
-        { id: "clamp-force", term: "Clamping force", value: formatQuantity(system, "force", result.clampForceN, 0), note: "at engagement, for the hand force on the lever" },
-        { id: "torque", term: "Torque on the cam", value: formatQuantity(system, "torque", result.torqueNm), note: "hand force × lever length" },
-        { id: "throw", term: "Throw", value: len(result.throwMm), note: "2 × eccentricity: the most it can lift" },
-        { id: "engage-angle", term: "Engages at", value: deg(result.engageAngleDeg), note: "rotation from the lowest point where the gap is taken up" },
-        { id: "rise-angle", term: "Rise angle there", value: deg(result.riseAngleDeg), note: `largest ${deg(result.maxRiseAngleDeg)}, at ${deg(result.maxRiseAtAngleDeg)}` },
+        {
+          id: "clamp-force",
+          term: "Clamping force",
+          value: formatQuantity(system, "force", result.clampForceN, 0),
+          note: "at engagement, for the hand force on the lever",
+        },
+        {
+          id: "torque",
+          term: "Torque on the cam",
+          value: formatQuantity(system, "torque", result.torqueNm),
+          note: "hand force × lever length",
+        },
+        {
+          id: "throw",
+          term: "Throw",
+          value: len(result.throwMm),
+          note: "2 × eccentricity: the most it can lift",
+        },
+        {
+          id: "engage-angle",
+          term: "Engages at",
+          value: deg(result.engageAngleDeg),
+          note: "rotation from the lowest point where the gap is taken up",
+        },
+        {
+          id: "rise-angle",
+          term: "Rise angle there",
+          value: deg(result.riseAngleDeg),
+          note: `largest ${deg(result.maxRiseAngleDeg)}, at ${deg(result.maxRiseAtAngleDeg)}`,
+        },
         {
           id: "ratio",
           term: "Diameter ÷ eccentricity",

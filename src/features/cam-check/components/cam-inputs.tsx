@@ -19,7 +19,9 @@ export function CamInputs({
     <div className="space-y-6">
       {camGroups.map((group) => (
         <fieldset key={group.id} className="space-y-4">
-          <legend className="mb-2 border-b border-steel-200 pb-1 text-lg font-semibold text-steel-950">{group.title}</legend>
+          <legend className="mb-2 border-b border-steel-200 pb-1 text-lg font-semibold text-steel-950">
+            {group.title}
+          </legend>
           <div className="grid gap-4 sm:grid-cols-2 md:grid-cols-3 lg:grid-cols-1 xl:grid-cols-2">
             {camFields
               .filter((f) => f.group === group.id)

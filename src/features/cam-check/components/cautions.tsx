@@ -1,7 +1,10 @@
 /** The safety cautions that go with these figures, as the calculator gives them. */
 export function Cautions({ cautions }: { cautions: string[] }) {
   return (
-    <aside aria-labelledby="cautions-heading" className="rounded-lg border-l-4 border-caution-700 bg-caution-50 p-4">
+    <aside
+      aria-labelledby="cautions-heading"
+      className="rounded-lg border-l-4 border-caution-700 bg-caution-50 p-4"
+    >
       <h2 id="cautions-heading" className="flex items-center gap-2 text-lg text-caution-700">
         <svg viewBox="0 0 24 24" className="size-5" aria-hidden="true">
           <path d="M12 2 1 21h22L12 2z" fill="currentColor" />

@@ -1,7 +1,11 @@
 import type { ReactNode } from "react";
 
 /** A grid of labelled figures: the term, the value in mono, and an optional note. */
-export function FigureList({ items }: { items: Array<{ id: string; term: string; value: ReactNode; note?: ReactNode }> }) {
+export function FigureList({
+  items,
+}: {
+  items: Array<{ id: string; term: string; value: ReactNode; note?: ReactNode }>;
+}) {
   return (
     <dl className="grid gap-px overflow-hidden rounded-lg border border-steel-200 bg-steel-200 sm:grid-cols-2">
       {items.map((item) => (

@@ -13,7 +13,9 @@ export function MomentBalance({ result, system }: { result: CamResult; system: U
   const len = (mm: number) => formatQuantity(system, "length", mm, system === "inch" ? 5 : 3);
   return (
     <figure className="space-y-3 self-start rounded-lg bg-steel-50 p-4">
-      <figcaption className="font-semibold text-steel-950">The moments about the pivot where it engages</figcaption>
+      <figcaption className="font-semibold text-steel-950">
+        The moments about the pivot where it engages
+      </figcaption>
       <div>
         <p className="flex justify-between gap-3 text-sm text-steel-700">
           <span>Load turning it open (e · sin φ)</span>
@@ -44,8 +46,8 @@ export function MomentBalance({ result, system }: { result: CamResult; system: U
         </p>
       </div>
       <p className="text-sm text-steel-600">
-        Each is a lever arm: multiplied by the clamping force it gives a moment. The cam stays put while the friction bar is the
-        longer one.
+        Each is a lever arm: multiplied by the clamping force it gives a moment. The cam stays put while the
+        friction bar is the longer one.
       </p>
     </figure>
   );

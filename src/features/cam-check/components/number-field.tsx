@@ -65,7 +65,9 @@ export function NumberField({
           className="figure w-full min-w-0 bg-transparent px-3 text-right text-lg text-steel-950 outline-none"
         />
         {unit ? (
-          <span className="figure flex items-center border-l border-steel-200 bg-steel-100 px-3 text-steel-700">{unit}</span>
+          <span className="figure flex items-center border-l border-steel-200 bg-steel-100 px-3 text-steel-700">
+            {unit}
+          </span>
         ) : null}
       </div>
       {error ? (

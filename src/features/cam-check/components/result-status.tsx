@@ -18,7 +18,9 @@ export function ResultStatus({ status, hasResult }: { status: CamStatus; hasResu
     case "input-problem":
       return (
         <Notice tone="caution" title="Fix the marked input">
-          {hasResult ? "The results below are for the last complete cam you entered." : "Results appear once every input is valid."}
+          {hasResult
+            ? "The results below are for the last complete cam you entered."
+            : "Results appear once every input is valid."}
         </Notice>
       );
     case "server-problem":

@@ -10,7 +10,9 @@ export function Sources({ sources, zoneBasis }: { sources: CamResult["sources"];
       <ul className="mt-2 space-y-1">
         {sources.map((s) => (
           <li key={s.title}>
-            <span className="mr-2 rounded bg-steel-200 px-1.5 py-0.5 text-xs font-semibold uppercase text-steel-700">{s.kind}</span>
+            <span className="mr-2 rounded bg-steel-200 px-1.5 py-0.5 text-xs font-semibold uppercase text-steel-700">
+              {s.kind}
+            </span>
             {s.title}
             {s.note ? <span className="text-steel-600"> — {s.note}</span> : null}
           </li>

@@ -41,16 +41,30 @@ export function Suggestions({
         {suggestions.map((s) => {
           const locks = s.selfLockMargin !== null && s.selfLockMargin >= 0;
           const locksEverywhere = locks && s.selfLockMarginOverZone !== null && s.selfLockMarginOverZone >= 0;
-          const tag = s.selfLockMargin === null ? "not possible" : locksEverywhere ? "locks" : locks ? "locks at this setting" : "does not lock";
+          const tag =
+            s.selfLockMargin === null
+              ? "not possible"
+              : locksEverywhere
+                ? "locks"
+                : locks
+                  ? "locks at this setting"
+                  : "does not lock";
           const q = quantityOf(s.parameter);
           return (
-            <li key={s.parameter} className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4">
+            <li
+              key={s.parameter}
+              className="flex flex-col gap-2 rounded-lg border border-steel-200 bg-white p-4"
+            >
               <div className="flex flex-wrap items-center justify-between gap-2">
                 <h3 className="text-lg">{titles[s.parameter]}</h3>
                 <span
                   className={cn(
                     "rounded px-2 py-0.5 text-xs font-semibold uppercase tracking-wide",
-                    locksEverywhere ? "bg-holds-50 text-holds-700" : locks ? "bg-caution-50 text-caution-700" : "bg-fault-50 text-fault-700",
+                    locksEverywhere
+                      ? "bg-holds-50 text-holds-700"
+                      : locks
+                        ? "bg-caution-50 text-caution-700"
+                        : "bg-fault-50 text-fault-700",
                   )}
                 >
                   {tag}
@@ -61,7 +75,11 @@ export function Suggestions({
               </p>
               <p className="text-sm text-steel-700">{effectText(s.message)}</p>
               {s.selfLockMargin !== null && s.parameter !== "muContact" ? (
-                <Button variant="secondary" className="mt-auto self-start" onClick={() => onTry(s.parameter, s.to)}>
+                <Button
+                  variant="secondary"
+                  className="mt-auto self-start"
+                  onClick={() => onTry(s.parameter, s.to)}
+                >
                   Try this change
                 </Button>
               ) : null}

@@ -7,7 +7,13 @@ const options: Array<{ value: UnitSystem; label: string; detail: string }> = [
 ];
 
 /** Millimetres or inches, as a pair of radio buttons styled as one switch (arrow keys move between them). */
-export function UnitSwitch({ value, onChange }: { value: UnitSystem; onChange: (system: UnitSystem) => void }) {
+export function UnitSwitch({
+  value,
+  onChange,
+}: {
+  value: UnitSystem;
+  onChange: (system: UnitSystem) => void;
+}) {
   return (
     <fieldset className="flex items-center gap-3">
       <legend className="sr-only">Units</legend>

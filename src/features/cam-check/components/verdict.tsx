@@ -40,22 +40,33 @@ const icons: Record<Tone, string> = { holds: "✔", caution: "!", fault: "✖" }
 export function Verdict({ result, system }: { result: CamResult; system: UnitSystem }) {
   const v = lockVerdict(result);
   return (
-    <div className={cn("rounded-lg border-2 p-4", toneClasses[v.tone])} data-testid="lock-verdict" data-tone={v.tone}>
+    <div
+      className={cn("rounded-lg border-2 p-4", toneClasses[v.tone])}
+      data-testid="lock-verdict"
+      data-tone={v.tone}
+    >
       <div className="flex items-start gap-3">
-        <span aria-hidden="true" className="figure flex size-9 shrink-0 items-center justify-center rounded-full bg-current text-lg">
+        <span
+          aria-hidden="true"
+          className="figure flex size-9 shrink-0 items-center justify-center rounded-full bg-current text-lg"
+        >
           <span className="text-white">{icons[v.tone]}</span>
         </span>
         <div>
           <p className="text-2xl font-bold">{v.title}</p>
           <p className="mt-1 text-steel-800">{v.text}</p>
           <p className="figure mt-2 text-sm text-steel-800">
-            Self-locking margin: {percent(result.selfLockMargin)} where it engages, {percent(result.selfLockMarginOverZone)} at
-            the weakest point of the working zone
+            Self-locking margin: {percent(result.selfLockMargin)} where it engages,{" "}
+            {percent(result.selfLockMarginOverZone)} at the weakest point of the working zone
           </p>
           {v.tone === "holds" ? null : (
             <p className="mt-2 font-semibold text-steel-900">
-              With everything else as entered, it locks over the whole working zone with an eccentricity of at most{" "}
-              <span className="figure">{formatQuantity(system, "length", result.maxSelfLockingEccentricityMm)}</span>.
+              With everything else as entered, it locks over the whole working zone with an eccentricity of at
+              most{" "}
+              <span className="figure">
+                {formatQuantity(system, "length", result.maxSelfLockingEccentricityMm)}
+              </span>
+              .
             </p>
           )}
         </div>

@@ -35,12 +35,16 @@ export function useCamCheck() {
   // Debounce on the text of the input so an equal object does not restart the timer.
   const inputKey = input ? JSON.stringify(input) : null;
   const settledKey = useDebouncedValue(inputKey, camDebounceMs);
-  const settledInput = useMemo(() => (settledKey ? (JSON.parse(settledKey) as EccentricCamInput) : null), [settledKey]);
+  const settledInput = useMemo(
+    () => (settledKey ? (JSON.parse(settledKey) as EccentricCamInput) : null),
+    [settledKey],
+  );
   const query = useCamResult(settledInput);
 
   const [lastGood, setLastGood] = useState<{ input: EccentricCamInput; result: CamResult } | null>(null);
   useEffect(() => {
-    if (query.data && !query.isPlaceholderData && settledInput) setLastGood({ input: settledInput, result: query.data });
+    if (query.data && !query.isPlaceholderData && settledInput)
+      setLastGood({ input: settledInput, result: query.data });
   }, [query.data, query.isPlaceholderData, settledInput]);
 
   const serverError = query.isError && settledKey === inputKey ? query.error : null;

@@ -16,7 +16,11 @@ interface FormState {
 
 /** The cam check's inputs as typed, the unit system, and the calculator input they make. */
 export function useCamForm(initialSystem: UnitSystem = "mm") {
-  const [state, setState] = useState<FormState>(() => ({ system: initialSystem, texts: defaultTexts(initialSystem), before: {} }));
+  const [state, setState] = useState<FormState>(() => ({
+    system: initialSystem,
+    texts: defaultTexts(initialSystem),
+    before: {},
+  }));
 
   const setText = useCallback((key: CamFieldKey, text: string) => {
     setState((s) => ({ ...s, texts: { ...s.texts, [key]: text }, before: {} }));
@@ -28,7 +32,11 @@ export function useCamForm(initialSystem: UnitSystem = "mm") {
       const field = camFields.find((f) => f.key === key);
       if (!field) return s;
       const info = unitOf(s.system, field.quantity);
-      return { ...s, texts: { ...s.texts, [key]: trimNumber(base * info.fromBase, info.decimals) }, before: {} };
+      return {
+        ...s,
+        texts: { ...s.texts, [key]: trimNumber(base * info.fromBase, info.decimals) },
+        before: {},
+      };
     });
   }, []);
 
@@ -40,7 +48,10 @@ export function useCamForm(initialSystem: UnitSystem = "mm") {
     });
   }, []);
 
-  const reset = useCallback(() => setState((s) => ({ system: s.system, texts: defaultTexts(s.system), before: {} })), []);
+  const reset = useCallback(
+    () => setState((s) => ({ system: s.system, texts: defaultTexts(s.system), before: {} })),
+    [],
+  );
 
   const parsed = useMemo(() => parseCamTexts(state.texts, state.system), [state.texts, state.system]);
   return { system: state.system, texts: state.texts, parsed, setText, setBaseValue, setSystem, reset };

@@ -49,7 +49,8 @@ export function parseCamTexts(
   for (const f of camFields) {
     const n = readNumber(texts[f.key]);
     if (n === null) {
-      errors[f.key] = texts[f.key].trim() === "" ? `Enter the ${f.label.toLowerCase()}.` : "Enter a number, like 1.5.";
+      errors[f.key] =
+        texts[f.key].trim() === "" ? `Enter the ${f.label.toLowerCase()}.` : "Enter a number, like 1.5.";
       continue;
     }
     raw[f.key] = toBase(system, f.quantity, n);

@@ -37,7 +37,13 @@ describe("reading what was typed", () => {
   });
 
   it("inch input reaches the calculator in mm", () => {
-    const texts = { ...defaultTexts("inch"), diameter: "1", eccentricity: "0.05", gap: "0.02", handForce: "10" };
+    const texts = {
+      ...defaultTexts("inch"),
+      diameter: "1",
+      eccentricity: "0.05",
+      gap: "0.02",
+      handForce: "10",
+    };
     const parsed = parseCamTexts(texts, "inch");
     expect(parsed.errors).toBeNull();
     expect(parsed.input?.diameter).toBe(25.4);
@@ -47,7 +53,10 @@ describe("reading what was typed", () => {
 
   it("names the field that is empty, not a number, or out of the calculator's range", () => {
     const parsed = parseCamTexts({ ...defaultTexts("mm"), diameter: "", eccentricity: "abc" }, "mm");
-    expect(parsed.errors).toEqual({ diameter: "Enter the cam diameter.", eccentricity: "Enter a number, like 1.5." });
+    expect(parsed.errors).toEqual({
+      diameter: "Enter the cam diameter.",
+      eccentricity: "Enter a number, like 1.5.",
+    });
     // The range rules come from the calculator's own schema.
     const negative = parseCamTexts({ ...defaultTexts("mm"), muContact: "-0.1" }, "mm");
     expect(negative.errors?.muContact).toBe("Contact friction coefficient cannot be negative.");

@@ -60,7 +60,12 @@ export function trimNumber(value: number, decimals: number): string {
 }
 
 /** A calculator value, shown with its unit symbol: "1628 N", "0.0472 in". */
-export function formatQuantity(system: UnitSystem, quantity: Quantity, base: number, decimals?: number): string {
+export function formatQuantity(
+  system: UnitSystem,
+  quantity: Quantity,
+  base: number,
+  decimals?: number,
+): string {
   const info = table[system][quantity];
   const text = trimNumber(toShown(system, quantity, base), decimals ?? info.decimals);
   if (!info.symbol) return text;

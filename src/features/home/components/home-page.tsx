@@ -20,7 +20,10 @@ const steps = [
 
 const numbers = [
   ["Cams", "throw, engagement angle, self-locking and the clamping force a hand on the lever gives"],
-  ["Fits", "ISO 286 hole and shaft tolerances such as H7/g6, and ISO 2768 general tolerances for the title block"],
+  [
+    "Fits",
+    "ISO 286 hole and shaft tolerances such as H7/g6, and ISO 2768 general tolerances for the title block",
+  ],
   ["Threads", "ISO metric pitch, minor diameter, tap drill and engagement length"],
   ["Holes", "reaming allowance and pre-drill sizes, counterbores for socket head cap screws"],
   ["Cutting", "spindle speed from cutting speed and diameter, kept inside your machine's limits"],
@@ -41,12 +44,17 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
       <section className="bg-steel-900 text-steel-100">
         <div className="mx-auto grid max-w-6xl items-center gap-8 px-4 py-12 md:grid-cols-[1.4fr_1fr]">
           <div>
-            <p className="figure text-sm uppercase tracking-widest text-spark-300">Workholding · fixtures · stops</p>
-            <h1 className="mt-2 text-4xl text-white sm:text-5xl">Size your shop accessories to your machine before you cut metal.</h1>
+            <p className="figure text-sm uppercase tracking-widest text-spark-300">
+              Workholding · fixtures · stops
+            </p>
+            <h1 className="mt-2 text-4xl text-white sm:text-5xl">
+              Size your shop accessories to your machine before you cut metal.
+            </h1>
             <p className="mt-4 max-w-2xl text-lg text-steel-200">
-              Jigwright turns a parametric template into a part made for your vise and your stock: geometry checks,
-              the engineering numbers that matter, a 3D preview and a dimensioned drawing pack. You find out that a cam
-              will not lock, a hole breaks out of a wall or a clamp will slip while it is still a drawing.
+              Jigwright turns a parametric template into a part made for your vise and your stock: geometry
+              checks, the engineering numbers that matter, a 3D preview and a dimensioned drawing pack. You
+              find out that a cam will not lock, a hole breaks out of a wall or a clamp will slip while it is
+              still a drawing.
             </p>
             <div className="mt-6 flex flex-wrap gap-3">
               <Link to={paths.camCheck} className={buttonClasses("primary")}>
@@ -89,9 +97,9 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
               Numbers with their sources
             </h2>
             <p className="mt-2 text-steel-700">
-              Every figure names where it comes from: a published standard, a handbook table or worked example, or a
-              plainly labelled rule of common practice. Figures that feed a real setup come with the cautions that go with
-              them; none of them is a guarantee.
+              Every figure names where it comes from: a published standard, a handbook table or worked
+              example, or a plainly labelled rule of common practice. Figures that feed a real setup come with
+              the cautions that go with them; none of them is a guarantee.
             </p>
           </div>
           <dl className="grid gap-3 sm:grid-cols-2">
@@ -104,15 +112,18 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
           </dl>
         </section>
 
-        <section aria-labelledby="cam-heading" className="rounded-xl border border-steel-200 bg-white p-6 shadow-sm">
+        <section
+          aria-labelledby="cam-heading"
+          className="rounded-xl border border-steel-200 bg-white p-6 shadow-sm"
+        >
           <h2 id="cam-heading" className="text-2xl">
             Will your cam clamp hold?
           </h2>
           <p className="mt-2 max-w-3xl text-steel-700">
-            The cam check takes a circular cam&apos;s diameter and eccentricity, the pivot, the lever and the friction, and
-            shows its throw, where it engages, whether it locks on its own and how hard it clamps for the force of your hand,
-            with a chart over the whole turn. When a cam will not lock, it says which term is to blame and what to change.
-            No account needed.
+            The cam check takes a circular cam&apos;s diameter and eccentricity, the pivot, the lever and the
+            friction, and shows its throw, where it engages, whether it locks on its own and how hard it
+            clamps for the force of your hand, with a chart over the whole turn. When a cam will not lock, it
+            says which term is to blame and what to change. No account needed.
           </p>
           <Link to={paths.camCheck} className={buttonClasses("primary", "mt-4")}>
             Open the cam check
@@ -126,7 +137,8 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
           <ul className="mt-4 grid gap-3 sm:grid-cols-2">
             {people.map(([who, why]) => (
               <li key={who} className="rounded-lg bg-steel-100 px-4 py-3">
-                <span className="font-semibold text-steel-950">{who}</span> <span className="text-steel-700">{why}.</span>
+                <span className="font-semibold text-steel-950">{who}</span>{" "}
+                <span className="text-steel-700">{why}.</span>
               </li>
             ))}
           </ul>
