@@ -8,9 +8,13 @@ import { paths } from "@/lib/paths";
 export function NotFound() {
   const location = useLocation();
   return (
-    <Page title="Nothing at this address" lead="The page may have moved, or the link may have a typing error in it.">
+    <Page
+      title="Nothing at this address"
+      lead="The page may have moved, or the link may have a typing error in it."
+    >
       <p className="text-steel-700">
-        Not found: <code className="figure rounded bg-steel-100 px-1.5 py-0.5 text-steel-900">{location.pathname}</code>
+        Not found:{" "}
+        <code className="figure rounded bg-steel-100 px-1.5 py-0.5 text-steel-900">{location.pathname}</code>
       </p>
       <div className="mt-6 flex flex-wrap gap-3">
         <Link to={paths.home} className={buttonClasses("primary")}>

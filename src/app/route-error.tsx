@@ -10,11 +10,17 @@ import { NotFound } from "./not-found";
 export function RouteError() {
   const error = useRouteError();
   if (isRouteErrorResponse(error) && error.status === 404) return <NotFound />;
-  const detail = error instanceof Error ? error.message : isRouteErrorResponse(error) ? error.statusText : null;
+  const detail =
+    error instanceof Error ? error.message : isRouteErrorResponse(error) ? error.statusText : null;
   return (
-    <Page title="This page stopped working" lead="Something went wrong while showing it. Nothing you entered was sent anywhere new.">
+    <Page
+      title="This page stopped working"
+      lead="Something went wrong while showing it. Nothing you entered was sent anywhere new."
+    >
       {detail ? (
-        <pre className="figure max-w-3xl overflow-x-auto rounded-md bg-steel-100 p-3 text-sm text-steel-800">{detail}</pre>
+        <pre className="figure max-w-3xl overflow-x-auto rounded-md bg-steel-100 p-3 text-sm text-steel-800">
+          {detail}
+        </pre>
       ) : null}
       <div className="mt-6 flex flex-wrap gap-3">
         <button type="button" className={buttonClasses("primary")} onClick={() => window.location.reload()}>

@@ -16,8 +16,13 @@ function fakeFetch(...answers: Array<() => Response>) {
   return calls;
 }
 
-const json = (status: number, body: unknown, headers: Record<string, string> = {}) => () =>
-  new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json", ...headers } });
+const json =
+  (status: number, body: unknown, headers: Record<string, string> = {}) =>
+  () =>
+    new Response(JSON.stringify(body), {
+      status,
+      headers: { "content-type": "application/json", ...headers },
+    });
 
 const header = (init: RequestInit, name: string) => (init.headers as Record<string, string>)[name];
 
@@ -51,7 +56,13 @@ describe("api client: error JSON becomes a typed ApiError", () => {
   });
 
   it("reads Retry-After on a 429", async () => {
-    fakeFetch(json(429, { error: { code: "rate_limited", message: "Too many attempts.", details: [] } }, { "retry-after": "120" }));
+    fakeFetch(
+      json(
+        429,
+        { error: { code: "rate_limited", message: "Too many attempts.", details: [] } },
+        { "retry-after": "120" },
+      ),
+    );
     const e = (await api.get("/api/x").catch((err: unknown) => err)) as ApiError;
     expect(e.code).toBe("rate_limited");
     expect(e.retryAfterSeconds).toBe(120);
@@ -67,7 +78,10 @@ describe("api client: error JSON becomes a typed ApiError", () => {
   });
 
   it("turns a network failure into status 0", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => Promise.reject(new TypeError("Failed to fetch"))));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => Promise.reject(new TypeError("Failed to fetch"))),
+    );
     const e = (await api.get("/api/x").catch((err: unknown) => err)) as ApiError;
     expect(e.status).toBe(0);
     expect(e.code).toBe("network_error");
@@ -107,7 +121,12 @@ describe("api client: CSRF token", () => {
 
   it("on a 403 csrf_invalid, fetches a fresh token and retries once", async () => {
     const refused = json(403, { error: { code: "csrf_invalid", message: "Missing token.", details: [] } });
-    const calls = fakeFetch(json(200, { csrfToken: "old" }), refused, json(200, { csrfToken: "new" }), json(200, { done: true }));
+    const calls = fakeFetch(
+      json(200, { csrfToken: "old" }),
+      refused,
+      json(200, { csrfToken: "new" }),
+      json(200, { done: true }),
+    );
     const result = await api.post("/api/things", { schema: z.object({ done: z.boolean() }) });
     expect(result).toEqual({ done: true });
     expect(header(calls[1]!.init, "x-csrf-token")).toBe("old");
@@ -121,7 +140,10 @@ describe("api client: CSRF token", () => {
     expect(e.code).toBe("csrf_invalid");
 
     resetCsrfToken();
-    const calls = fakeFetch(json(200, { csrfToken: "c" }), json(403, { error: { code: "forbidden", message: "Admins only.", details: [] } }));
+    const calls = fakeFetch(
+      json(200, { csrfToken: "c" }),
+      json(403, { error: { code: "forbidden", message: "Admins only.", details: [] } }),
+    );
     const f = (await api.delete("/api/things/1").catch((err: unknown) => err)) as ApiError;
     expect(f.code).toBe("forbidden");
     expect(calls).toHaveLength(2);

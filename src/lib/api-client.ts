@@ -40,7 +40,12 @@ async function getCsrfToken(): Promise<string> {
   return csrfPending;
 }
 
-async function send<S extends z.ZodType>(method: Method, path: string, options: RequestOptions<S>, token?: string) {
+async function send<S extends z.ZodType>(
+  method: Method,
+  path: string,
+  options: RequestOptions<S>,
+  token?: string,
+) {
   const headers: Record<string, string> = { accept: "application/json" };
   if (options.body !== undefined) headers["content-type"] = "application/json";
   if (token) headers[csrfHeaderName] = token;
@@ -64,7 +69,11 @@ async function send<S extends z.ZodType>(method: Method, path: string, options: 
   if (!options.schema) return json as z.output<S>;
   const parsed = options.schema.safeParse(json);
   if (!parsed.success) {
-    throw new ApiError(response.status, "bad_response", "The server sent an answer this page does not understand.");
+    throw new ApiError(
+      response.status,
+      "bad_response",
+      "The server sent an answer this page does not understand.",
+    );
   }
   return parsed.data as z.output<S>;
 }
@@ -89,9 +98,11 @@ export async function request<S extends z.ZodType>(
 }
 
 export const api = {
-  get: <S extends z.ZodType>(path: string, options?: Omit<RequestOptions<S>, "body">) => request("GET", path, options),
+  get: <S extends z.ZodType>(path: string, options?: Omit<RequestOptions<S>, "body">) =>
+    request("GET", path, options),
   post: <S extends z.ZodType>(path: string, options?: RequestOptions<S>) => request("POST", path, options),
   patch: <S extends z.ZodType>(path: string, options?: RequestOptions<S>) => request("PATCH", path, options),
   put: <S extends z.ZodType>(path: string, options?: RequestOptions<S>) => request("PUT", path, options),
-  delete: <S extends z.ZodType>(path: string, options?: RequestOptions<S>) => request("DELETE", path, options),
+  delete: <S extends z.ZodType>(path: string, options?: RequestOptions<S>) =>
+    request("DELETE", path, options),
 };

@@ -11,7 +11,13 @@ export class ApiError extends Error {
   /** From the `Retry-After` header of a 429 or 503, when the server sent one. */
   readonly retryAfterSeconds: number | null;
 
-  constructor(status: number, code: string, message: string, details: ErrorDetail[] = [], retryAfterSeconds: number | null = null) {
+  constructor(
+    status: number,
+    code: string,
+    message: string,
+    details: ErrorDetail[] = [],
+    retryAfterSeconds: number | null = null,
+  ) {
     super(message);
     this.name = "ApiError";
     this.status = status;

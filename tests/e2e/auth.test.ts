@@ -40,7 +40,9 @@ describe("sign-in flow in the browser", () => {
     const password = "a lathe with a taper attachment";
 
     await page.goto(app.baseUrl);
-    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toContain("before you cut metal");
+    await expect
+      .poll(() => page.getByRole("heading", { level: 1 }).textContent())
+      .toContain("before you cut metal");
     await screenshot("home-guest");
 
     await page.getByRole("link", { name: "Create account" }).first().click();

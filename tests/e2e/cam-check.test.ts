@@ -48,7 +48,9 @@ describe("cam check in the browser, as a guest", () => {
     await page.getByRole("heading", { name: "Why it does not lock" }).waitFor();
     expect(await page.getByTestId("cam-explanation").textContent()).toMatch(/short of what is needed/);
     // The safety cautions sit with the figures and name the failure.
-    expect(await page.getByRole("complementary", { name: "Before you rely on it" }).textContent()).toContain("does not self-lock");
+    expect(await page.getByRole("complementary", { name: "Before you rely on it" }).textContent()).toContain(
+      "does not self-lock",
+    );
     await screenshot("cam-check-does-not-lock");
 
     // Bring the eccentricity down a quarter millimetre at a time until the cam locks everywhere.

@@ -40,7 +40,11 @@ export interface E2eApp {
   baseUrl: string;
   db: Database;
   /** Makes an account through the app's own auth service (the same code as registration and the CLI). */
-  createUser(input: { role: Role; displayName?: string; password?: string }): Promise<PublicUser & { password: string }>;
+  createUser(input: {
+    role: Role;
+    displayName?: string;
+    password?: string;
+  }): Promise<PublicUser & { password: string }>;
   close(): Promise<void>;
 }
 
@@ -72,7 +76,10 @@ export async function startApp(): Promise<E2eApp> {
     async createUser({ role, displayName, password }) {
       const pw = password ?? `e2e ${randomBytes(6).toString("hex")} pass`;
       const email = uniqueEmail(role);
-      const user = await auth.register({ email, password: pw, displayName: displayName ?? `E2E ${role}` }, role);
+      const user = await auth.register(
+        { email, password: pw, displayName: displayName ?? `E2E ${role}` },
+        role,
+      );
       return {
         id: user.id,
         email,

@@ -10,11 +10,18 @@ import { paths } from "@/lib/paths";
 export function Component() {
   const me = useMe();
   const location = useLocation();
-  if (me.isPending) return <Page title="Accounts"><Spinner label="Checking your sign-in" /></Page>;
+  if (me.isPending)
+    return (
+      <Page title="Accounts">
+        <Spinner label="Checking your sign-in" />
+      </Page>
+    );
   if (me.isError) {
     return (
       <Page title="Accounts">
-        <Notice tone="fault" title="Could not check who is signed in">{me.error.message}</Notice>
+        <Notice tone="fault" title="Could not check who is signed in">
+          {me.error.message}
+        </Notice>
       </Page>
     );
   }
@@ -25,13 +32,18 @@ export function Component() {
       <Page title="Accounts">
         <Notice tone="caution" title="For administrators only">
           You are signed in as a {user.role}. Managing accounts and roles needs the admin role.{" "}
-          <Link to={paths.home} className="font-semibold underline">Back to the home page</Link>
+          <Link to={paths.home} className="font-semibold underline">
+            Back to the home page
+          </Link>
         </Notice>
       </Page>
     );
   }
   return (
-    <Page title="Accounts and roles" lead="Everyone with a Jigwright account, and the role that decides what they may do.">
+    <Page
+      title="Accounts and roles"
+      lead="Everyone with a Jigwright account, and the role that decides what they may do."
+    >
       <AdminUsers currentUserId={user.id} />
     </Page>
   );

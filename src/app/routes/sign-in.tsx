@@ -11,12 +11,20 @@ export function Component() {
   const me = useMe();
   if (me.data) return <Navigate to={next} replace />;
   return (
-    <Page title="Sign in" width="narrow" lead="Your vise and machine profiles, saved designs and drawing packs are waiting.">
+    <Page
+      title="Sign in"
+      width="narrow"
+      lead="Your vise and machine profiles, saved designs and drawing packs are waiting."
+    >
       <div className="rounded-lg border border-steel-200 bg-white p-6 shadow-sm">
         <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
       </div>
       <p className="mt-4 text-sm text-steel-600">
-        No account needed for the <Link to={paths.camCheck} className="font-semibold text-spark-700 underline">cam check</Link>.
+        No account needed for the{" "}
+        <Link to={paths.camCheck} className="font-semibold text-spark-700 underline">
+          cam check
+        </Link>
+        .
       </p>
     </Page>
   );

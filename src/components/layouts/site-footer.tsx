@@ -12,7 +12,10 @@ export function SiteFooter() {
             materials and friction you enter, not guarantees. Check every setup on the machine before cutting,
             and follow the machine maker&apos;s guidance, local regulations and your shop&apos;s own practice.
           </p>
-          <p>Jigwright: parametric templates, checks and drawings for the accessories a small shop makes for itself.</p>
+          <p>
+            Jigwright: parametric templates, checks and drawings for the accessories a small shop makes for
+            itself.
+          </p>
         </div>
       </div>
     </footer>

@@ -26,7 +26,9 @@ export function SiteHeader({ nav, account }: { nav: NavItem[]; account: ReactNod
                   className={({ isActive }) =>
                     cn(
                       "inline-flex min-h-11 items-center rounded-md px-3 font-semibold",
-                      isActive ? "bg-steel-800 text-spark-300" : "text-steel-200 hover:bg-steel-800 hover:text-white",
+                      isActive
+                        ? "bg-steel-800 text-spark-300"
+                        : "text-steel-200 hover:bg-steel-800 hover:text-white",
                     )
                   }
                 >
