@@ -1,5 +1,4 @@
 import { useParams } from "react-router";
-import { Page } from "@/components/layouts/page";
 import { useMe } from "@/features/auth/api/get-me";
 import { SharedDesignView } from "@/features/designs/components/shared-design-view";
 import { designsPath } from "@/features/designs/paths";
@@ -9,8 +8,9 @@ export function Component() {
   const { token = "" } = useParams();
   const me = useMe();
   return (
-    <Page title="Shared design">
+    // Not the shared Page layout: the design's own name is the page heading, once it has loaded.
+    <div className="mx-auto max-w-6xl px-4 py-8">
       <SharedDesignView token={token} signedIn={Boolean(me.data)} designsHref={designsPath} />
-    </Page>
+    </div>
   );
 }

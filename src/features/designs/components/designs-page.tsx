@@ -69,7 +69,9 @@ export function DesignsPage({ catalogueHref }: { catalogueHref: string }) {
       ) : null}
       {designs.data && designs.data.length === 0 ? (
         <div className="rounded-lg border border-dashed border-steel-300 bg-white px-4 py-8 text-center">
-          <p className="text-lg font-semibold">No saved designs yet.</p>
+          <p className="text-lg font-semibold">
+            {status?.kind === "deleted" ? "No saved designs left." : "No saved designs yet."}
+          </p>
           <p className="mt-1 text-steel-700">
             Open a template, set it up for your vise, and save it: it will wait here, pinned to the version
             you used.

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Link } from "react-router";
 import { Button, buttonClasses } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
@@ -27,21 +27,38 @@ export function SharedDesignView({
   const shared = useSharedDesign(token);
   const copy = useCreateDesign();
   const [copied, setCopied] = useState<string | null>(null);
+  const name = shared.data?.name;
+  useEffect(() => {
+    document.title = `${name ?? "Shared design"} · Jigwright`;
+  }, [name]);
 
-  if (shared.isPending) return <Spinner label="Opening the shared design" />;
+  const heading = <h1 className="mb-4 text-3xl sm:text-4xl">Shared design</h1>;
+  if (shared.isPending) {
+    return (
+      <>
+        {heading}
+        <Spinner label="Opening the shared design" />
+      </>
+    );
+  }
   if (shared.isError) {
     const gone = isApiError(shared.error) && (shared.error.status === 404 || shared.error.status === 400);
-    return gone ? (
-      <Notice tone="caution" title="This link does not open a design">
-        The link is mistyped, or its owner has revoked it or deleted the design. Ask them for a new link.
-      </Notice>
-    ) : (
-      <Notice tone="fault" title="The shared design could not be loaded">
-        <p>{shared.error.message}</p>
-        <Button variant="secondary" className="mt-2" onClick={() => shared.refetch()}>
-          Try again
-        </Button>
-      </Notice>
+    return (
+      <>
+        {heading}
+        {gone ? (
+          <Notice tone="caution" title="This link does not open a design">
+            The link is mistyped, or its owner has revoked it or deleted the design. Ask them for a new link.
+          </Notice>
+        ) : (
+          <Notice tone="fault" title="The shared design could not be loaded">
+            <p>{shared.error.message}</p>
+            <Button variant="secondary" className="mt-2" onClick={() => shared.refetch()}>
+              Try again
+            </Button>
+          </Notice>
+        )}
+      </>
     );
   }
   const d = shared.data;
@@ -51,9 +68,9 @@ export function SharedDesignView({
         <p className="text-sm font-semibold uppercase tracking-wide text-spark-700">
           Shared design · read only
         </p>
-        <h2 id="shared-design-name" className="text-3xl">
+        <h1 id="shared-design-name" className="text-3xl sm:text-4xl">
           {d.name}
-        </h2>
+        </h1>
         <p className="text-sm text-steel-600">
           Shared {formatWhen(d.sharedAt)} · last changed {formatWhen(d.updatedAt)} · works in{" "}
           <span className="figure">{d.units}</span>

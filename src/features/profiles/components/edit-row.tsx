@@ -56,7 +56,8 @@ export function EditRow({
             onKeyDown,
             autoFocus: i === 0,
             className: cn(
-              "min-h-11 w-full min-w-20 rounded-md border bg-white px-2 py-1 text-base text-steel-950",
+              "min-h-11 w-full rounded-md border bg-white px-2 py-1 text-base text-steel-950",
+              f.kind === "text" ? "min-w-48" : "min-w-20",
               error ? "border-fault-700" : "border-steel-300 hover:border-steel-400",
             ),
           };

@@ -9,6 +9,7 @@ import {
 import { useMemo, useState, type ReactNode } from "react";
 import type { ZodType } from "zod";
 import { Button } from "@/components/ui/button";
+import { cn } from "@/components/ui/cn";
 import { Notice } from "@/components/ui/notice";
 import { isApiError } from "@/lib/api-error";
 import {
@@ -188,11 +189,15 @@ export function ProfileTable<R extends ProfileRow, F extends Record<string, unkn
     ) : null;
 
   const sortedRows = table.getRowModel().rows;
+  const isNumber = (key: string) => fields.some((f) => f.key === key && f.kind === "number");
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3">
         <Button variant="secondary" onClick={startAdd} disabled={editing?.id === "new"}>
-          <span aria-hidden="true">＋</span> Add a {noun}
+          <svg viewBox="0 0 16 16" className="size-4" aria-hidden="true">
+            <path d="M8 2v12M2 8h12" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
+          </svg>
+          Add a {noun}
         </Button>
         <div aria-live="polite" className="min-w-0 flex-1">
           {outcome ? <Notice tone={outcome.tone}>{outcome.text}</Notice> : null}
@@ -215,7 +220,7 @@ export function ProfileTable<R extends ProfileRow, F extends Record<string, unkn
                       <th
                         key={header.id}
                         scope="col"
-                        className="px-3 py-2"
+                        className={cn("px-3 py-2", isNumber(header.column.id) && "text-right")}
                         aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
                       >
                         <button
@@ -251,7 +256,10 @@ export function ProfileTable<R extends ProfileRow, F extends Record<string, unkn
                     className="border-t border-steel-200 hover:bg-steel-50"
                   >
                     {row.getVisibleCells().map((cell) => (
-                      <td key={cell.id} className="px-3 py-2 align-middle">
+                      <td
+                        key={cell.id}
+                        className={cn("px-3 py-2 align-middle", isNumber(cell.column.id) && "text-right")}
+                      >
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </td>
                     ))}

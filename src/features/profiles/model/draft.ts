@@ -69,7 +69,10 @@ export function checkDraft<T>(schema: ZodType<T>, draft: Draft, fields: readonly
 }
 
 /** The fields of `next` that differ from `original` (what a PATCH should send). */
-export function changedFields<T extends Record<string, unknown>>(original: Record<string, unknown>, next: T): Partial<T> {
+export function changedFields<T extends Record<string, unknown>>(
+  original: Record<string, unknown>,
+  next: T,
+): Partial<T> {
   const out: Partial<T> = {};
   for (const key of Object.keys(next) as Array<keyof T & string>) {
     if (original[key] !== next[key]) out[key] = next[key];
