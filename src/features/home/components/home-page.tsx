@@ -37,8 +37,11 @@ const people = [
   ["Apprentices and learners", "who want to see why a clamp holds before trusting it"],
 ] as const;
 
-/** What Jigwright is for, and the ways in. */
-export function HomePage({ signedIn }: { signedIn: boolean }) {
+/**
+ * What Jigwright is for, and the ways in. `cataloguePath` is where the template catalogue lives (the
+ * route composes it in, so this feature does not import the catalogue's).
+ */
+export function HomePage({ signedIn, cataloguePath }: { signedIn: boolean; cataloguePath: string }) {
   return (
     <div>
       <section className="bg-steel-900 text-steel-100">
@@ -57,15 +60,25 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
               still a drawing.
             </p>
             <div className="mt-6 flex flex-wrap gap-3">
-              <Link to={paths.camCheck} className={buttonClasses("primary")}>
+              <Link to={cataloguePath} className={buttonClasses("primary")}>
+                Browse the templates
+              </Link>
+              <Link to={paths.camCheck} className={buttonClasses("onDark")}>
                 Check a cam clamp
               </Link>
-              {signedIn ? null : (
-                <Link to={paths.register} className={buttonClasses("onDark")}>
-                  Create a free account
-                </Link>
-              )}
             </div>
+            {signedIn ? null : (
+              <p className="mt-4 text-steel-300">
+                Everything here works without an account;{" "}
+                <Link
+                  to={paths.register}
+                  className="font-semibold text-spark-300 underline underline-offset-2"
+                >
+                  create a free one
+                </Link>{" "}
+                to keep your vises, machines and designs.
+              </p>
+            )}
           </div>
           <div className="rounded-xl bg-steel-50 p-4 shadow-lg">
             <CamSketch className="w-full" />
@@ -86,6 +99,14 @@ export function HomePage({ signedIn }: { signedIn: boolean }) {
                 </span>
                 <h3 className="mt-3 text-lg">{step.title}</h3>
                 <p className="mt-1 text-steel-700">{step.text}</p>
+                {i === 0 ? (
+                  <Link
+                    to={cataloguePath}
+                    className="mt-2 inline-block font-semibold text-spark-700 underline underline-offset-2"
+                  >
+                    Open the catalogue
+                  </Link>
+                ) : null}
               </li>
             ))}
           </ol>
