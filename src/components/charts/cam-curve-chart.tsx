@@ -48,7 +48,15 @@ const trim = (value: number, decimals: number) => {
  * shaded and the stretches where the cam would not hold shaded red. A table of the same figures sits
  * under it for anyone who cannot read the chart. Shared so any page showing a cam analysis draws it alike.
  */
-export function CamCurveChart({ curve, engageAngleDeg, throwMm, workingZone, length, force, title = "Lift and clamping force over the turn" }: CamCurveChartProps) {
+export function CamCurveChart({
+  curve,
+  engageAngleDeg,
+  throwMm,
+  workingZone,
+  length,
+  force,
+  title = "Lift and clamping force over the turn",
+}: CamCurveChartProps) {
   const rows = curve.map((p) => ({
     angleDeg: p.angleDeg,
     lift: p.liftMm * length.perBase,
@@ -97,30 +105,92 @@ export function CamCurveChart({ curve, engageAngleDeg, throwMm, workingZone, len
               ticks={[0, 30, 60, 90, 120, 150, 180]}
               tickFormatter={(v: number) => `${v}°`}
               tick={{ fontSize: 12, fill: "var(--color-steel-700)" }}
-              label={{ value: "turn from the lowest point", position: "insideBottom", offset: -12, fontSize: 12, fill: "var(--color-steel-700)" }}
+              label={{
+                value: "turn from the lowest point",
+                position: "insideBottom",
+                offset: -12,
+                fontSize: 12,
+                fill: "var(--color-steel-700)",
+              }}
             />
-            <YAxis yAxisId="lift" width={50} tick={{ fontSize: 12, fill: "var(--color-steel-700)" }} tickFormatter={(v: number) => trim(v, length.decimals > 2 ? 3 : 1)} />
-            <YAxis yAxisId="force" orientation="right" width={54} tick={{ fontSize: 12, fill: "var(--color-steel-700)" }} tickFormatter={(v: number) => trim(v, 0)} />
+            <YAxis
+              yAxisId="lift"
+              width={50}
+              tick={{ fontSize: 12, fill: "var(--color-steel-700)" }}
+              tickFormatter={(v: number) => trim(v, length.decimals > 2 ? 3 : 1)}
+            />
+            <YAxis
+              yAxisId="force"
+              orientation="right"
+              width={54}
+              tick={{ fontSize: 12, fill: "var(--color-steel-700)" }}
+              tickFormatter={(v: number) => trim(v, 0)}
+            />
             {workingZone ? (
-              <ReferenceArea yAxisId="lift" x1={workingZone.startDeg} x2={workingZone.endDeg} fill="var(--color-steel-300)" fillOpacity={0.25} />
+              <ReferenceArea
+                yAxisId="lift"
+                x1={workingZone.startDeg}
+                x2={workingZone.endDeg}
+                fill="var(--color-steel-300)"
+                fillOpacity={0.25}
+              />
             ) : null}
             {slips.map(([a, b]) => (
-              <ReferenceArea key={a} yAxisId="lift" x1={a} x2={b} fill="var(--color-fault-300)" fillOpacity={0.4} />
+              <ReferenceArea
+                key={a}
+                yAxisId="lift"
+                x1={a}
+                x2={b}
+                fill="var(--color-fault-300)"
+                fillOpacity={0.4}
+              />
             ))}
             <ReferenceLine
               yAxisId="lift"
               x={engageAngleDeg}
               stroke="var(--color-spark-700)"
               strokeWidth={2}
-              label={{ value: `meets the work ${trim(engageAngleDeg, 1)}°`, position: "top", fill: "var(--color-spark-700)", fontSize: 12, fontWeight: 600 }}
+              label={{
+                value: `meets the work ${trim(engageAngleDeg, 1)}°`,
+                position: "top",
+                fill: "var(--color-spark-700)",
+                fontSize: 12,
+                fontWeight: 600,
+              }}
             />
-            <ReferenceDot yAxisId="lift" x={engageAngleDeg} y={engageLift} r={5} fill="var(--color-spark-700)" stroke="white" />
-            <Line yAxisId="lift" dataKey="lift" name="lift" stroke="var(--color-steel-800)" strokeWidth={2.5} dot={false} isAnimationActive={false} />
-            <Line yAxisId="force" dataKey="force" name="clamping force" stroke="var(--color-spark-600)" strokeWidth={2.5} dot={false} isAnimationActive={false} connectNulls={false} />
+            <ReferenceDot
+              yAxisId="lift"
+              x={engageAngleDeg}
+              y={engageLift}
+              r={5}
+              fill="var(--color-spark-700)"
+              stroke="white"
+            />
+            <Line
+              yAxisId="lift"
+              dataKey="lift"
+              name="lift"
+              stroke="var(--color-steel-800)"
+              strokeWidth={2.5}
+              dot={false}
+              isAnimationActive={false}
+            />
+            <Line
+              yAxisId="force"
+              dataKey="force"
+              name="clamping force"
+              stroke="var(--color-spark-600)"
+              strokeWidth={2.5}
+              dot={false}
+              isAnimationActive={false}
+              connectNulls={false}
+            />
             <Tooltip
               formatter={(value, name) => {
                 const v = typeof value === "number" ? value : Number(value);
-                return name === "lift" ? [`${trim(v, length.decimals)} ${length.symbol}`, "lift"] : [`${trim(v, force.decimals)} ${force.symbol}`, String(name)];
+                return name === "lift"
+                  ? [`${trim(v, length.decimals)} ${length.symbol}`, "lift"]
+                  : [`${trim(v, force.decimals)} ${force.symbol}`, String(name)];
               }}
               labelFormatter={(label) => `${String(label)}° from the lowest point`}
             />
@@ -128,16 +198,26 @@ export function CamCurveChart({ curve, engageAngleDeg, throwMm, workingZone, len
         </ResponsiveContainer>
       </div>
       <details className="mt-2">
-        <summary className="cursor-pointer rounded font-semibold text-steel-800">Show the figures as a table</summary>
+        <summary className="cursor-pointer rounded font-semibold text-steel-800">
+          Show the figures as a table
+        </summary>
         <div className="mt-2 max-h-64 overflow-auto">
           <table className="figure w-full text-right text-sm">
             <caption className="sr-only">{title}</caption>
             <thead className="sticky top-0 bg-steel-100 text-steel-700">
               <tr>
-                <th scope="col" className="px-2 py-1">turn</th>
-                <th scope="col" className="px-2 py-1">lift ({length.symbol})</th>
-                <th scope="col" className="px-2 py-1">force ({force.symbol})</th>
-                <th scope="col" className="px-2 py-1">holds</th>
+                <th scope="col" className="px-2 py-1">
+                  turn
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  lift ({length.symbol})
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  force ({force.symbol})
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  holds
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -145,7 +225,11 @@ export function CamCurveChart({ curve, engageAngleDeg, throwMm, workingZone, len
                 <tr key={p.angleDeg} className={p.engaged ? "text-steel-900" : "text-steel-600"}>
                   <td className="px-2 py-0.5">{p.angleDeg}°</td>
                   <td className="px-2 py-0.5">{trim(p.liftMm * length.perBase, length.decimals)}</td>
-                  <td className="px-2 py-0.5">{p.engaged && p.clampForceN !== null ? trim(p.clampForceN * force.perBase, force.decimals) : "—"}</td>
+                  <td className="px-2 py-0.5">
+                    {p.engaged && p.clampForceN !== null
+                      ? trim(p.clampForceN * force.perBase, force.decimals)
+                      : "—"}
+                  </td>
                   <td className="px-2 py-0.5">{p.selfLocking ? "yes" : "no"}</td>
                 </tr>
               ))}

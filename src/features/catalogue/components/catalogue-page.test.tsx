@@ -10,12 +10,22 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const reply = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
+const reply = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
 
 function renderCatalogue(answer: () => Response | Promise<Response>, url = "/templates") {
-  vi.stubGlobal("fetch", vi.fn(async () => answer()));
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async () => answer()),
+  );
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const element = <CataloguePage renderPicture={(t) => <div data-testid={`picture-${t.id}`} />} templateHref={(id) => `/templates/${id}`} camCheckHref="/cam-check" />;
+  const element = (
+    <CataloguePage
+      renderPicture={(t) => <div data-testid={`picture-${t.id}`} />}
+      templateHref={(id) => `/templates/${id}`}
+      camCheckHref="/cam-check"
+    />
+  );
   const router = createMemoryRouter([{ path: "/templates", element }], { initialEntries: [url] });
   render(
     <QueryClientProvider client={queryClient}>
@@ -27,7 +37,13 @@ function renderCatalogue(answer: () => Response | Promise<Response>, url = "/tem
 
 // Invented entries.
 const templates = [
-  { id: "cam-vise-stop", version: "1.0.0", name: "Cam-lock vise stop", family: "stop", summary: "Hooks over the fixed jaw." },
+  {
+    id: "cam-vise-stop",
+    version: "1.0.0",
+    name: "Cam-lock vise stop",
+    family: "stop",
+    summary: "Hooks over the fixed jaw.",
+  },
   { id: "toe-clamp", version: "1.0.0", name: "Toe clamp", family: "clamp", summary: "For the T-slots." },
 ];
 
@@ -36,7 +52,9 @@ describe("catalogue page", () => {
     renderCatalogue(() => reply(200, { templates }));
     const cards = await screen.findByRole("list", { name: "Templates" });
     const first = within(cards).getAllByRole("listitem")[0]!;
-    expect(within(first).getByRole("link", { name: "Cam-lock vise stop" }).getAttribute("href")).toBe("/templates/cam-vise-stop");
+    expect(within(first).getByRole("link", { name: "Cam-lock vise stop" }).getAttribute("href")).toBe(
+      "/templates/cam-vise-stop",
+    );
     expect(within(first).getByText("Stops")).toBeTruthy();
     expect(within(first).getByText("Hooks over the fixed jaw.")).toBeTruthy();
     expect(within(first).getByTestId("picture-cam-vise-stop")).toBeTruthy();
@@ -60,7 +78,11 @@ describe("catalogue page", () => {
   });
 
   it("shows the server's message and a retry when the list cannot be loaded", async () => {
-    renderCatalogue(() => reply(503, { error: { code: "service_unavailable", message: "The database is not answering.", details: [] } }));
+    renderCatalogue(() =>
+      reply(503, {
+        error: { code: "service_unavailable", message: "The database is not answering.", details: [] },
+      }),
+    );
     expect(await screen.findByText("The database is not answering.")).toBeTruthy();
     expect(screen.getByRole("button", { name: "Try again" })).toBeTruthy();
   });

@@ -4,9 +4,27 @@ import { familiesOf, filterTemplates, searchWords } from "./filter";
 
 // Invented catalogue entries for the filter; not real templates.
 const list: TemplateSummary[] = [
-  { id: "cam-vise-stop", version: "1.0.0", name: "Cam-lock vise stop", family: "stop", summary: "Hooks over the fixed jaw; a cam locks the stop rod." },
-  { id: "toe-clamp", version: "1.0.0", name: "Toe clamp", family: "clamp", summary: "Low clamp for the mill table's T-slots." },
-  { id: "step-block", version: "2.1.0", name: "Step block", family: "block", summary: "Stepped support under a clamp's heel." },
+  {
+    id: "cam-vise-stop",
+    version: "1.0.0",
+    name: "Cam-lock vise stop",
+    family: "stop",
+    summary: "Hooks over the fixed jaw; a cam locks the stop rod.",
+  },
+  {
+    id: "toe-clamp",
+    version: "1.0.0",
+    name: "Toe clamp",
+    family: "clamp",
+    summary: "Low clamp for the mill table's T-slots.",
+  },
+  {
+    id: "step-block",
+    version: "2.1.0",
+    name: "Step block",
+    family: "block",
+    summary: "Stepped support under a clamp's heel.",
+  },
 ];
 
 describe("catalogue filter", () => {

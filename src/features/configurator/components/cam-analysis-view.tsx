@@ -1,8 +1,24 @@
-import { CamCurveChart } from "@/components/charts/cam-curve-chart";
+import { lazy, Suspense } from "react";
 import { cn } from "@/components/ui/cn";
 import { convertLength, formatNumber, newtonToLbf, NEWTON_PER_LBF, type LengthUnit } from "@/engine/units";
 import type { CamAnalysis } from "../model/cam-analysis";
 import { CautionsList } from "./cautions-list";
+
+/** The chart library is big: it arrives in its own chunk, after the figures are already on screen. */
+const CamCurveChart = lazy(() =>
+  import("@/components/charts/cam-curve-chart").then((m) => ({ default: m.CamCurveChart })),
+);
+
+function ChartPlaceholder() {
+  return (
+    <div
+      className="flex h-[22rem] items-center justify-center rounded-lg border border-steel-200 bg-white text-steel-600"
+      role="status"
+    >
+      Loading the chart…
+    </div>
+  );
+}
 
 function Figure({
   label,
@@ -107,22 +123,24 @@ export function CamAnalysisView({
         </div>
         <CautionsList cautions={cam.cautions} headingId={`${id}-cautions`} />
       </div>
-      <CamCurveChart
-        curve={cam.curve}
-        engageAngleDeg={cam.engageAngleDeg}
-        throwMm={cam.throwMm}
-        workingZone={cam.workingZone}
-        length={
-          units === "in"
-            ? { symbol: "in", perBase: 1 / 25.4, decimals: 4 }
-            : { symbol: "mm", perBase: 1, decimals: 2 }
-        }
-        force={
-          units === "in"
-            ? { symbol: "lbf", perBase: 1 / NEWTON_PER_LBF, decimals: 1 }
-            : { symbol: "N", perBase: 1, decimals: 0 }
-        }
-      />
+      <Suspense fallback={<ChartPlaceholder />}>
+        <CamCurveChart
+          curve={cam.curve}
+          engageAngleDeg={cam.engageAngleDeg}
+          throwMm={cam.throwMm}
+          workingZone={cam.workingZone}
+          length={
+            units === "in"
+              ? { symbol: "in", perBase: 1 / 25.4, decimals: 4 }
+              : { symbol: "mm", perBase: 1, decimals: 2 }
+          }
+          force={
+            units === "in"
+              ? { symbol: "lbf", perBase: 1 / NEWTON_PER_LBF, decimals: 1 }
+              : { symbol: "N", perBase: 1, decimals: 0 }
+          }
+        />
+      </Suspense>
     </div>
   );
 }

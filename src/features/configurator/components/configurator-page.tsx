@@ -98,8 +98,14 @@ function Configurator({
     },
     [form],
   );
-  const analysisLabels = useMemo(
-    () => Object.fromEntries((template.analyses ?? []).filter((a) => a.label).map((a) => [a.id, a.label!])),
+  const analysisMeta = useMemo(
+    () =>
+      Object.fromEntries(
+        (template.analyses ?? []).map((a) => [
+          a.id,
+          { ...(a.label ? { label: a.label } : {}), ...(a.calculator ? { calculator: a.calculator } : {}) },
+        ]),
+      ),
     [template.analyses],
   );
   const hand = evaluation?.parameters.handForce;
@@ -128,8 +134,11 @@ function Configurator({
         <UnitSwitch value={units} onChange={config.switchUnits} />
       </div>
 
-      <div className="mt-6 grid items-start gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+      <div className="mt-6 grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <div className="space-y-4">
+          <a href="#results" className="inline-block font-semibold text-spark-700 underline lg:hidden">
+            Jump to the checks and figures
+          </a>
           {signedIn ? (
             <ViseFill
               parameterKeys={new Set(specs.map((s) => s.key))}
@@ -154,7 +163,7 @@ function Configurator({
           />
         </div>
 
-        <div className="space-y-4">
+        <div id="results" className="scroll-mt-4 space-y-4">
           <EvaluationStatusLine status={live.status} />
           {renderViewer({ templateId: template.id, request: live.settled })}
           {evaluation ? (
@@ -162,7 +171,7 @@ function Configurator({
               <ChecksPanel checks={evaluation.checks} labelOf={labelOf} onFocusField={focusField} />
               <AnalysisPanel
                 analyses={evaluation.analyses}
-                labels={analysisLabels}
+                meta={analysisMeta}
                 units={shownUnits}
                 {...(typeof hand === "number" ? { handForceN: hand } : {})}
               />
@@ -177,7 +186,7 @@ function Configurator({
           ) : (
             <ResultsPlaceholder failed={live.status.kind === "server-problem" ? live.status.message : null} />
           )}
-          <div className="grid gap-4 xl:grid-cols-2">
+          <div className="space-y-4">
             {signedIn ? (
               <SaveDesignForm
                 templateId={template.id}

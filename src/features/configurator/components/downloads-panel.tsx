@@ -134,7 +134,7 @@ export function DownloadsPanel({
           <option value="third">Third-angle projection</option>
         </select>
       </div>
-      <ul className="mt-3 grid gap-2 sm:grid-cols-2">
+      <ul className="mt-3 grid gap-2 sm:grid-cols-2 xl:grid-cols-3">
         {files.map((f) => (
           <li key={f.format}>
             <Button

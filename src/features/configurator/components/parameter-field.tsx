@@ -101,18 +101,11 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
         : 0.01
       : (spec.step ?? (spec.kind === "count" ? 1 : 0.1));
   return (
-    <div className="flex flex-col gap-1">
-      <div className="flex items-baseline justify-between gap-2">
-        <label htmlFor={id} className="font-semibold text-steel-900">
-          {spec.label}
-          {unit ? <span className="sr-only"> ({unit.spoken})</span> : null}
-        </label>
-        {range ? (
-          <span id={rangeId} className="figure text-sm text-steel-600">
-            {range}
-          </span>
-        ) : null}
-      </div>
+    <div className="grid grid-cols-[minmax(0,1fr)_minmax(7.5rem,9.5rem)] items-center gap-x-3 gap-y-1">
+      <label htmlFor={id} className="font-semibold leading-tight text-steel-900">
+        {spec.label}
+        {unit ? <span className="sr-only"> ({unit.spoken})</span> : null}
+      </label>
       <div className={cn(inputBox, error ? "border-fault-700" : "border-steel-300 hover:border-steel-400")}>
         <input
           id={id}
@@ -124,7 +117,7 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
           aria-describedby={
             [errorId, range ? rangeId : undefined, helpId].filter(Boolean).join(" ") || undefined
           }
-          className="figure w-full min-w-0 bg-transparent px-3 text-right text-lg text-steel-950 outline-none"
+          className="figure w-full min-w-0 bg-transparent px-2.5 text-right text-lg text-steel-950 outline-none"
           {...registered}
           onKeyDown={(e) => {
             // Arrow keys nudge the value by one step, as a spin box would.
@@ -140,21 +133,27 @@ export function ParameterField({ spec, form, templateUnits, units, materialNames
         {unit ? (
           <span
             aria-hidden="true"
-            className="figure flex min-w-12 items-center justify-center border-l border-steel-200 bg-steel-100 px-2 text-steel-700"
+            className="figure flex min-w-11 items-center justify-center border-l border-steel-200 bg-steel-100 px-2 text-sm text-steel-700"
           >
             {unit.symbol}
           </span>
         ) : null}
       </div>
-      {spec.kind === "force" && units === "in" && typed !== null ? (
-        <p className="figure text-sm text-steel-600">≈ {trimNumber(newtonToLbf(typed), 1)} lbf</p>
-      ) : null}
-      <FieldProblem id={errorId} message={error} />
-      {spec.help ? (
-        <p id={helpId} className="text-sm text-steel-600">
-          {spec.help}
+      <div className="col-span-2 space-y-0.5">
+        <FieldProblem id={errorId} message={error} />
+        <p className="text-sm text-steel-600">
+          {range ? (
+            <span id={rangeId} className="figure whitespace-nowrap text-steel-700">
+              {range}
+            </span>
+          ) : null}
+          {spec.kind === "force" && units === "in" && typed !== null ? (
+            <span className="figure"> (≈ {trimNumber(newtonToLbf(typed), 1)} lbf)</span>
+          ) : null}
+          {range && spec.help ? <span aria-hidden="true"> · </span> : null}
+          {spec.help ? <span id={helpId}>{spec.help}</span> : null}
         </p>
-      ) : null}
+      </div>
     </div>
   );
 }

@@ -23,7 +23,7 @@ export function ParameterForm({
       {groupParameters(specs).map((group) => (
         <fieldset key={group.name} className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm">
           <legend className="px-1 text-lg font-semibold text-steel-950">{group.name}</legend>
-          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-1 xl:grid-cols-2">
+          <div className="mt-1 grid gap-4">
             {group.parameters.map((spec) => (
               <ParameterField
                 key={spec.key}

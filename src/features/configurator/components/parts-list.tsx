@@ -82,11 +82,11 @@ export function PartsList({ parts, units }: { parts: readonly PartSummaryView[];
                 </th>
                 <td className="figure py-1.5 pr-3 text-right">{p.quantity}</td>
                 <td className="py-1.5 pr-3">{p.materialName ?? p.material}</td>
-                <td className="figure py-1.5 pr-3">
+                <td className="figure whitespace-nowrap py-1.5 pr-3">
                   {len(p.bboxMm.x, units)} × {len(p.bboxMm.y, units)} × {len(p.bboxMm.z, units)}
                 </td>
-                <td className="figure py-1.5 pr-3">{stockText(p.stock, units)}</td>
-                <td className="figure py-1.5 text-right">{massText(p.massKg)}</td>
+                <td className="figure whitespace-nowrap py-1.5 pr-3">{stockText(p.stock, units)}</td>
+                <td className="figure whitespace-nowrap py-1.5 text-right">{massText(p.massKg)}</td>
               </tr>
             ))}
           </tbody>

@@ -77,7 +77,7 @@ export function ViseFill({
           ))}
         </select>
       )}
-      <p aria-live="polite" className="mt-1 min-h-5 text-sm text-steel-800">
+      <p aria-live="polite" className="text-sm text-steel-800">
         {message}
       </p>
     </div>

@@ -36,24 +36,26 @@ export type AnalysisView =
   | {
       id: string;
       kind: "figures";
-      figures: Array<{ key: string; value: number | string | boolean }>;
+      calculator: string | undefined;
+      result: Record<string, unknown>;
       cautions: string[];
     };
 
 /** Reads each analysis of an evaluation into what the panel can draw. */
-export function readAnalyses(analyses: Readonly<Record<string, Record<string, unknown>>>): AnalysisView[] {
-  return Object.entries(analyses).map(([id, result]) => {
+export function readAnalyses(
+  analyses: Readonly<Record<string, Record<string, unknown>>>,
+  calculatorOf: (id: string) => string | undefined = () => undefined,
+): AnalysisView[] {
+  return Object.entries(analyses).map(([id, result]): AnalysisView => {
     if (typeof result.error === "string") return { id, kind: "failed", reason: result.error };
-    const cam = camAnalysisSchema.safeParse(result);
-    if (cam.success) return { id, kind: "cam", cam: cam.data };
-    const figures = Object.entries(result)
-      .filter((entry): entry is [string, number | string | boolean] =>
-        ["number", "string", "boolean"].includes(typeof entry[1]),
-      )
-      .filter(([key]) => key !== "explanation");
+    const calculator = calculatorOf(id);
+    if (calculator === "eccentric-cam" || calculator === undefined) {
+      const cam = camAnalysisSchema.safeParse(result);
+      if (cam.success) return { id, kind: "cam", cam: cam.data };
+    }
     const cautions = Array.isArray(result.cautions)
       ? result.cautions.filter((c): c is string => typeof c === "string")
       : [];
-    return { id, kind: "figures", figures: figures.map(([key, value]) => ({ key, value })), cautions };
+    return { id, kind: "figures", calculator, result, cautions };
   });
 }

@@ -96,10 +96,9 @@ export default function ModelViewer({ templateId, request }: ModelViewerProps) {
       status={
         status === "updating" ? (
           <Spinner label="Updating the model" className="text-sm" />
-        ) : status === "error" ? (
+        ) : status === "error" && data ? (
           <span className="text-sm font-semibold text-fault-700">
-            {data ? "Showing the last model: " : ""}
-            {model.error?.message}
+            Showing the last model: {model.error?.message}
           </span>
         ) : null
       }
