@@ -32,7 +32,7 @@ export function RootLayout() {
       <div aria-hidden="true" className="h-1 bg-transparent">
         {navigation.state === "loading" ? <div className="h-1 w-1/3 animate-pulse bg-spark-500" /> : null}
       </div>
-      <main id="main" className="flex-1" tabIndex={-1}>
+      <main id="main" className="flex-1 outline-none" tabIndex={-1}>
         <Outlet />
       </main>
       <SiteFooter />
