@@ -126,4 +126,24 @@ describe("sign-in flow in the browser", () => {
     expect(await page.getByText("/no/such/page").count()).toBeGreaterThan(0);
     await screenshot("not-found");
   });
+
+  it("signs in with the keyboard alone: skip link first, Tab between fields, Enter to send", async () => {
+    const user = await app.createUser({ role: "reviewer", displayName: "Keyboard Kit" });
+    const { page } = await open();
+    await page.goto(`${app.baseUrl}/sign-in`);
+    await page.getByRole("heading", { name: "Sign in" }).waitFor();
+    await page.keyboard.press("Tab");
+    const focused = () => page.evaluate(() => document.activeElement?.textContent ?? "");
+    expect(await focused()).toBe("Skip to content");
+    await page.getByLabel("E-mail").focus();
+    await page.keyboard.type(user.email);
+    await page.keyboard.press("Tab");
+    expect(await page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.type)).toBe(
+      "password",
+    );
+    await page.keyboard.type(user.password);
+    await page.keyboard.press("Enter");
+    await header(page).getByText("Keyboard Kit").waitFor();
+    expect(await header(page).textContent()).toContain("reviewer");
+  });
 });
