@@ -49,7 +49,11 @@ export type Axis = z.infer<typeof axisSchema>;
 export const MAX_EXPRESSION_LENGTH = 500;
 
 /** An expression as written in a template (parsed and evaluated by the engine's expression sandbox). */
-export const expressionSchema = z.string().trim().min(1, "An expression may not be empty.").max(MAX_EXPRESSION_LENGTH);
+export const expressionSchema = z
+  .string()
+  .trim()
+  .min(1, "An expression may not be empty.")
+  .max(MAX_EXPRESSION_LENGTH, `An expression may be at most ${MAX_EXPRESSION_LENGTH} characters long.`);
 
 interface FieldKinds<N extends z.ZodType, S extends z.ZodType, B extends z.ZodType> {
   num: N;
