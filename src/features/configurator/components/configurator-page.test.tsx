@@ -64,8 +64,9 @@ describe("configurator: mm/inch switch", () => {
     await waitFor(() => expect(evaluations(calls)).toHaveLength(2));
     const inch = evaluations(calls)[1]!;
     expect(inch.units).toBe("in");
-    // 100 / 25.4 to the 12 significant digits the engine keeps, not the 5 decimals on screen.
-    expect(inch.parameters.jawWidth).toBe(3.93700787402);
+    // 100 / 25.4 = 3.937007874015748…, not the 5 decimals on screen.
+    expect(inch.parameters.jawWidth).not.toBe(3.93701);
+    expect(Math.abs((inch.parameters.jawWidth as number) - 100 / 25.4)).toBeLessThan(1e-11);
     expect(inch.parameters.jawThickness).toBe(1);
     expect(inch.parameters.handForce).toBe(100);
 
@@ -248,6 +249,11 @@ describe("configurator: fill from my vise", () => {
     expect((screen.getByLabelText(/Jaw width/) as HTMLInputElement).value).toBe("4.92126");
     expect((screen.getByLabelText(/Jaw thickness/) as HTMLInputElement).value).toBe("0.86614");
     expect(screen.getByText("Filled jaw width, jaw thickness from “Club mill vise”.")).toBeTruthy();
-    await waitFor(() => expect(evaluations(calls).at(-1)!.parameters.jawWidth).toBe(4.92125984252));
+    // 125 mm / 25.4 = 4.921259842519685… in, exactly as the profile's millimetres, not the rounded text.
+    await waitFor(() =>
+      expect(Math.abs((evaluations(calls).at(-1)!.parameters.jawWidth as number) - 125 / 25.4)).toBeLessThan(
+        1e-11,
+      ),
+    );
   });
 });

@@ -28,9 +28,9 @@ describe("mm ↔ inch in place, exactly", () => {
   it("sends the exact inch value (100 / 25.4), not the rounded text", () => {
     const inch = convertFormState(specs, mm, "mm", "in");
     const sent = parameterValues(specs, inch, "in", "in")!;
-    // 100 / 25.4 = 3.937007874015748…, kept to 12 significant digits by src/engine/units.
-    expect(sent.jawWidth).toBe(3.93700787402);
-    expect(Math.abs((sent.jawWidth as number) * 25.4 - 100)).toBeLessThan(1e-9);
+    // 100 / 25.4 = 3.937007874015748… (the exact definition), not the 3.93701 on screen.
+    expect(sent.jawWidth).not.toBe(3.93701);
+    expect(Math.abs((sent.jawWidth as number) - 100 / 25.4)).toBeLessThan(1e-11);
     expect(sent.jawThickness).toBe(1);
     // In the template's own units (the address, saved designs) it is still exactly 100 mm.
     expect(parameterValues(specs, inch, "in", "mm")!.jawWidth).toBe(100);
