@@ -245,7 +245,7 @@ function guardFeature(ctx: Ctx, f: ResolvedFeature, index: number): void {
         if (ctx.issues.length > before) return;
         const sub: Ctx = { ...ctx, issues: [] };
         guardFeature(sub, copy, index);
-        for (const issue of sub.issues) ctx.issues.push({ ...issue, featureRef: featureRef(f, index), message: `${issue.message} (copy ${i + 1} of ${f.count})` });
+        for (const issue of sub.issues) ctx.issues.push({ ...issue, featureRef: featureRef(f, index), message: `${issue.message.replace(/\.$/, "")} (copy ${i + 1} of ${f.count}).` });
       });
       return;
     }
