@@ -18,9 +18,11 @@ import { authRouter } from "@server/modules/auth/router";
 import { adminService } from "@server/modules/admin/service";
 import { adminRouter } from "@server/modules/admin/router";
 import { machinesRouter, visesRouter } from "@server/modules/profiles/router";
-import { createDesignService, designsRouter, fixedCatalogue, sharedRouter, type TemplateCatalogue } from "@server/modules/designs";
+import { createDesignService, designsRouter, sharedRouter, storeCatalogue, type TemplateCatalogue } from "@server/modules/designs";
 import { templatesRouter, templatesService } from "@server/modules/templates";
 import { calculatorsRouter, calculatorsService } from "@server/modules/calculators";
+import { modelRouter, modelService } from "@server/modules/model";
+import type { KernelPool } from "@server/kernel";
 import { builtInTemplates, type TemplateStore } from "@server/templates";
 
 /**
@@ -38,6 +40,10 @@ export interface AppDeps {
   templateCatalogue?: TemplateCatalogue;
   /** The compiled template catalogue (defaults to the built-in templates, loaded once; a broken one fails start-up). */
   templates?: TemplateStore;
+  /** The solid kernel's worker pool (server/kernel); without it the 3D model routes answer 503. */
+  kernel?: KernelPool;
+  /** Size of the encoded 3D-model cache, MB. */
+  modelCacheMb?: number;
 }
 
 /** JSON bodies above this are refused with 413. Routes taking uploads set their own limit. */
@@ -99,11 +105,13 @@ export function createApp(deps: AppDeps): express.Express {
   // Mount each area's router here, one line each: app.use("/api/<area>", <area>Router(deps));
   app.use("/api/vises", visesRouter(db.models));
   app.use("/api/machines", machinesRouter(db.models));
-  const designs = createDesignService(db.models, deps.templateCatalogue ?? fixedCatalogue([]));
+  const templateStore = deps.templates ?? builtInTemplates();
+  const designs = createDesignService(db.models, deps.templateCatalogue ?? storeCatalogue(templateStore));
   app.use("/api/designs", designsRouter(designs));
   app.use("/api/shared", sharedRouter(designs));
-  app.use("/api/templates", templatesRouter(templatesService(deps.templates ?? builtInTemplates())));
+  app.use("/api/templates", templatesRouter(templatesService(templateStore)));
   app.use("/api/calculators", calculatorsRouter(calculatorsService()));
+  app.use("/api/templates", modelRouter(modelService({ templates: deps.templates ?? builtInTemplates(), kernel: deps.kernel, cacheMb: deps.modelCacheMb })));
   // --- end feature routers ---
 
   app.use("/api", notFoundHandler);

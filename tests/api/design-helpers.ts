@@ -5,6 +5,8 @@
 import type { CreateDesignBody } from "@/shared/designs";
 import type { CatalogueEntry, TemplateCatalogue } from "@server/modules/designs";
 
+type CatalogueParameters = CatalogueEntry["parameters"];
+
 /** A catalogue the test can publish new versions into and retire templates from. */
 export class TestCatalogue implements TemplateCatalogue {
   private readonly entries = new Map<string, CatalogueEntry>();
@@ -17,8 +19,14 @@ export class TestCatalogue implements TemplateCatalogue {
     return this.entries.get(templateId) ?? null;
   }
 
-  publish(id: string, version: string, name = this.entries.get(id)?.name ?? id): void {
-    this.entries.set(id, { id, version, name });
+  /** Publishes `version` of a template; with `parameters`, saved values are checked against them. */
+  publish(
+    id: string,
+    version: string,
+    name = this.entries.get(id)?.name ?? id,
+    parameters?: CatalogueParameters,
+  ): void {
+    this.entries.set(id, { id, version, name, ...(parameters ? { parameters } : {}) });
   }
 
   retire(id: string): void {

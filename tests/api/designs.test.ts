@@ -353,3 +353,60 @@ describe("another user's design", () => {
     expect((await owner.agent.post(`/api/designs/${d.id}/restore`)).status).toBe(200);
   });
 });
+
+describe("values checked against the template's parameters", () => {
+  const parameters = [
+    { key: "jawWidth", label: "Jaw width", value: "number" },
+    { key: "padMaterial", label: "Pad material", value: "text" },
+    { key: "withPad", label: "With pad", value: "boolean" },
+  ] as const;
+
+  it("refuses a name the template does not have and a value of the wrong type, one detail each", async () => {
+    catalogue.publish("test-checked-stop", "1.0.0", "Checked stop", parameters);
+    const { agent } = await signedInAs(t.app, t.db, "machinist");
+    const res = await agent.post(
+      "/api/designs",
+      designBody({
+        templateId: "test-checked-stop",
+        parameters: { jawWidth: "wide", withPad: 1, jawWidht: 100, padMaterial: "brass" },
+      }),
+    );
+    expect(res.status).toBe(400);
+    expect(errorOf(res).details).toEqual([
+      { path: "parameters.jawWidth", message: "Jaw width must be a number." },
+      { path: "parameters.withPad", message: "With pad must be true or false." },
+      { path: "parameters.jawWidht", message: 'The template "Checked stop" has no parameter "jawWidht".' },
+    ]);
+    const ok = await agent.post(
+      "/api/designs",
+      designBody({ templateId: "test-checked-stop", parameters: { jawWidth: 100, withPad: false } }),
+    );
+    expect(ok.status).toBe(201);
+  });
+
+  it("checks new values on PATCH, and old values when the pin moves to a version without them", async () => {
+    catalogue.publish("test-moving-stop", "1.0.0", "Moving stop", parameters);
+    const { agent } = await signedInAs(t.app, t.db, "machinist");
+    const d = await saved(agent, {
+      templateId: "test-moving-stop",
+      parameters: { jawWidth: 100, withPad: true },
+    });
+    const bad = await agent.patch(`/api/designs/${d.id}`, { parameters: { jawWidth: true } });
+    expect(errorOf(bad).details).toEqual([
+      { path: "parameters.jawWidth", message: "Jaw width must be a number." },
+    ]);
+
+    // Version 2 drops "withPad": moving the pin is refused until the value is gone.
+    catalogue.publish("test-moving-stop", "2.0.0", "Moving stop", parameters.slice(0, 2));
+    const move = await agent.patch(`/api/designs/${d.id}`, { useCurrentTemplateVersion: true });
+    expect(move.status).toBe(400);
+    expect(pathsOf(move)).toEqual(["parameters.withPad"]);
+    // A rename alone still works on the old pin.
+    expect((await agent.patch(`/api/designs/${d.id}`, { name: "Still on 1.0.0" })).status).toBe(200);
+    const moved = await agent.patch(`/api/designs/${d.id}`, {
+      useCurrentTemplateVersion: true,
+      parameters: { jawWidth: 100 },
+    });
+    expect(designOf(moved)).toMatchObject({ templateVersion: "2.0.0", parameters: { jawWidth: 100 } });
+  });
+});

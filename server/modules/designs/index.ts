@@ -20,3 +20,4 @@ export function createDesignService(
 export { designsRouter, sharedRouter } from "./router";
 export type { TemplateCatalogue, CatalogueEntry } from "./template-catalogue";
 export { fixedCatalogue } from "./template-catalogue";
+export { storeCatalogue } from "./store-catalogue";

@@ -13,6 +13,7 @@ import { profileNameMaxLength } from "@/shared/profiles";
 import type { DesignRecord } from "@server/db/models/design";
 import { badRequest, conflict, notFound } from "@server/lib/errors";
 import type { DesignChanges, DesignRepository, ShareLinkRepository } from "./repository";
+import { parameterProblems } from "./parameter-check";
 import { parametersOf, toApiDesign, toApiShareLink, toSharedDesign } from "./serialize";
 import type { CatalogueEntry, TemplateCatalogue } from "./template-catalogue";
 
@@ -103,6 +104,8 @@ export function designService(deps: DesignServiceDeps) {
           { path: "templateId", message: `There is no template "${body.templateId}" in the catalogue.` },
         ]);
       }
+      const problems = parameterProblems(body.parameters, current);
+      if (problems.length > 0) throw badRequest("Some fields are not valid.", problems);
       await requireRoom(ownerId);
       const d = await designs.create({
         ownerId,
@@ -120,8 +123,8 @@ export function designService(deps: DesignServiceDeps) {
       const d = await owned(ownerId, id);
       const { useCurrentTemplateVersion, ...fields } = body;
       const changes: DesignChanges = fields;
+      const current = await catalogue.current(d.templateId);
       if (useCurrentTemplateVersion) {
-        const current = await catalogue.current(d.templateId);
         if (!current) {
           throw conflict(
             `The catalogue no longer lists the template "${d.templateId}", so this design stays on version ${d.templateVersion}.`,
@@ -129,6 +132,15 @@ export function designService(deps: DesignServiceDeps) {
           );
         }
         changes.templateVersion = current.version;
+      }
+      // Values are checked against the template they will be pinned to, when the catalogue has that version.
+      if (
+        current &&
+        (changes.parameters || useCurrentTemplateVersion) &&
+        current.version === (changes.templateVersion ?? d.templateVersion)
+      ) {
+        const problems = parameterProblems(changes.parameters ?? parametersOf(d), current);
+        if (problems.length > 0) throw badRequest("Some fields are not valid.", problems);
       }
       return view(await designs.update(d, changes), origin);
     },

@@ -3,11 +3,22 @@
  * current. A port, so the designs area does not depend on how templates are stored; the app passes the
  * real catalogue and tests pass one whose versions they control.
  */
+/** What a saved value of one parameter must be: a number, a text (choice or material key) or true/false. */
+export type ParameterValueType = "number" | "text" | "boolean";
+
+export interface CatalogueParameter {
+  key: string;
+  label: string;
+  value: ParameterValueType;
+}
+
 export interface CatalogueEntry {
   id: string;
   /** The current published version (semantic version). */
   version: string;
   name: string;
+  /** The current version's parameters; when given, saved values are checked against them. */
+  parameters?: readonly CatalogueParameter[];
 }
 
 export interface TemplateCatalogue {
