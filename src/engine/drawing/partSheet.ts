@@ -13,7 +13,7 @@ import { assignToViews } from "./layout/assign";
 import type { Box } from "./layout/geometry";
 import { translateShapes } from "./layout/shapes";
 import { layoutView, type LaidOutView } from "./layout/viewLayout";
-import { sheetPoint, type DrawingSheet, type SheetShape, type SheetSize, type SheetSizeName } from "./model";
+import { sheetPoint, type DrawingSheet, type SheetPoint, type SheetShape, type SheetSize, type SheetSizeName } from "./model";
 import type { ProjectedPart, ViewName } from "./projection";
 import { chooseScale, type DrawingScale } from "./scale";
 import { errorStamp, frame, notesBlock, notesHeight, STAMP_HEIGHT_MM } from "./sheet/notes";
@@ -35,6 +35,11 @@ export interface SheetCommon {
   date: string;
   /** Messages of the template's failing error checks; any → stamp and note. */
   failingChecks: string[];
+  /** Notes the template prints on every sheet. */
+  sheetNotes?: string[];
+  /** Position in the pack (1-based) and the pack's page count, for "sheet n of m". */
+  sheetNumber?: number;
+  sheetCount?: number;
 }
 
 export interface PartSheetInput extends SheetCommon {
@@ -47,17 +52,37 @@ export interface PartSheetInput extends SheetCommon {
   showFitLimits?: boolean;
 }
 
-/** Where views may go: inside the frame, above the title block and notes strip. */
-export interface DrawingArea {
-  box: Box;
-  stripTop: number;
+/**
+ * Where things go on a sheet: the notes beside the title block when they fit there, else across the
+ * sheet above it (whichever leaves the views more height); the error stamp across the top left.
+ */
+export interface SheetRegions {
+  area: Box;
+  notesCorner: SheetPoint;
+  notesWidth: number;
+  stampCentre?: SheetPoint;
 }
 
-function drawingArea(size: SheetSize, notes: string[], stamped: boolean): { area: Box; notesWidth: number } {
+export function sheetRegions(size: SheetSize, notes: string[], stamped: boolean, reservedAboveTitle = 0): SheetRegions {
   const { min, max } = frameRect(size);
-  const notesWidth = max.x - min.x - TITLE_BLOCK_WIDTH_MM - 8;
-  const strip = Math.max(TITLE_BLOCK_HEIGHT_MM, notesHeight(notes, notesWidth) + 2) + (stamped ? STAMP_HEIGHT_MM + 4 : 0);
-  return { area: { minX: min.x + 4, maxX: max.x - 4, minY: min.y + strip + 4, maxY: max.y - 4 }, notesWidth };
+  const besideWidth = max.x - min.x - TITLE_BLOCK_WIDTH_MM - 8;
+  const acrossWidth = max.x - min.x - 6;
+  const tb = TITLE_BLOCK_HEIGHT_MM + reservedAboveTitle;
+  const beside = Math.max(tb, notesHeight(notes, besideWidth) + 2);
+  const across = tb + 4 + notesHeight(notes, acrossWidth);
+  const useBeside = beside <= across;
+  const strip = useBeside ? beside : across;
+  const top = max.y - 4 - (stamped ? STAMP_HEIGHT_MM + 4 : 0);
+  return {
+    area: { minX: min.x + 4, maxX: max.x - 4, minY: min.y + strip + 4, maxY: top },
+    notesCorner: useBeside ? sheetPoint(min.x + 3, min.y + 2) : sheetPoint(min.x + 3, min.y + tb + 4),
+    notesWidth: useBeside ? besideWidth : acrossWidth,
+    ...(stamped ? { stampCentre: sheetPoint(min.x + 70, max.y - 4 - STAMP_HEIGHT_MM / 2) } : {}),
+  };
+}
+
+function drawingArea(size: SheetSize, notes: string[], stamped: boolean): { area: Box } {
+  return { area: sheetRegions(size, notes, stamped).area };
 }
 
 export interface ViewSet {
@@ -99,11 +124,11 @@ export function composeSheet(
   stamped: boolean,
   fields: Parameters<typeof titleBlock>[0],
 ): SheetShape[] {
-  const { area, notesWidth } = drawingArea(size, notes, stamped);
+  const { area, notesCorner, notesWidth, stampCentre } = sheetRegions(size, notes, stamped);
   const { min, max } = frameRect(size);
   const shapes: SheetShape[] = [...frame(size), ...titleBlock(fields, sheetPoint(max.x, min.y))];
-  shapes.push(...notesBlock(notes, sheetPoint(min.x + 3, min.y + 2), notesWidth));
-  if (stamped) shapes.push(...errorStamp(sheetPoint(max.x - TITLE_BLOCK_WIDTH_MM / 2, min.y + TITLE_BLOCK_HEIGHT_MM + 3 + STAMP_HEIGHT_MM / 2)));
+  shapes.push(...notesBlock(notes, notesCorner, notesWidth));
+  if (stampCentre) shapes.push(...errorStamp(stampCentre));
   const b = set.arranged.box;
   const dx = (area.minX + area.maxX) / 2 - (b.minX + b.maxX) / 2;
   const dy = (area.minY + area.maxY) / 2 - (b.minY + b.maxY) / 2;
@@ -139,7 +164,7 @@ export function buildPartSheet(input: PartSheetInput): PartSheetResult {
     return part.datums?.[axis] === "max" ? bbox.max[axis] : bbox.min[axis];
   };
   const requests = annotatePart({ part, baseKind, bbox, datum, fmt, threads: input.threads, fits: input.fits, showFitLimits: input.showFitLimits ?? true });
-  const notes = partNotes({ part, fmt, generalTolerance: input.generalTolerance, material: input.material, failingChecks: input.failingChecks });
+  const notes = partNotes({ part, fmt, generalTolerance: input.generalTolerance, material: input.material, failingChecks: input.failingChecks, sheetNotes: input.sheetNotes });
   const stamped = input.failingChecks.length > 0;
   const candidates = input.sheetSize ? [SHEET_SIZES[input.sheetSize]] : sheetSeries(input.units);
   const cache = new Map<number, ViewSet>();
@@ -154,7 +179,7 @@ export function buildPartSheet(input: PartSheetInput): PartSheetResult {
   const { size, scale } = chooseSheetAndScale(candidates, (sz, s) => fits(setAt(s).arranged.box, drawingArea(sz, notes, stamped).area));
   const set = setAt(scale);
   const { unplaced } = assignToViews(requests, input.projected.views);
-  const material = input.material ? `${input.material.name}${input.material.grade ? ` (${input.material.grade})` : ""}` : part.material;
+  const material = input.material ? `${input.material.name}${input.material.grade && !input.material.name.includes("(") ? ` (${input.material.grade})` : ""}` : part.material;
   const shapes = composeSheet(size, set, notes, stamped, {
     title: `${part.name}${(part.quantity ?? 1) > 1 ? ` (qty ${part.quantity})` : ""}`,
     documentType: `Part drawing, ${input.template.name} v${input.template.version}`,
@@ -170,12 +195,42 @@ export function buildPartSheet(input: PartSheetInput): PartSheetResult {
     drawnBy: input.drawnBy,
     date: input.date,
     approved: stamped ? "NOT CHECKED" : "—",
-    sheet: "1 of 1",
+    sheet: `${input.sheetNumber ?? 1} of ${input.sheetCount ?? 1}`,
   });
   return {
-    sheet: { id: part.id, kind: "part", size, scaleLabel: scale.label, shapes, sheetNumber: 1, sheetCount: 1 },
+    sheet: { id: part.id, kind: "part", size, scaleLabel: scale.label, shapes, sheetNumber: input.sheetNumber ?? 1, sheetCount: input.sheetCount ?? 1 },
     unplaced,
     requests,
     features: featureNames(part),
   };
+}
+
+/**
+ * The part's views and dimensions at full size (1:1) in model space, for the DXF: the same layout as the
+ * sheet without frame and title block, with a short text block (name, material, drawing number, units,
+ * general tolerance) under the views. Coordinates are model millimetres.
+ */
+export function buildPartModelSpace(input: PartSheetInput): SheetShape[] {
+  const { part } = input;
+  const fmt = formatter(input.units);
+  const baseKind = baseKindOf(part);
+  const bbox = baseBox(part);
+  const datum = (axis: Axis) => (baseKind === "turned" && axis !== "z" ? 0 : part.datums?.[axis] === "max" ? bbox.max[axis] : bbox.min[axis]);
+  const requests = annotatePart({ part, baseKind, bbox, datum, fmt, threads: input.threads, fits: input.fits, showFitLimits: input.showFitLimits ?? true });
+  const set = layoutAtScale(input.projected, requests, 1, input.projection);
+  const shapes: SheetShape[] = [];
+  for (const v of set.views) {
+    const o = set.arranged.offsets.get(v.view.name)!;
+    shapes.push(...translateShapes(v.shapes, o.dx, o.dy));
+  }
+  const b = set.arranged.box;
+  const lines = [
+    `${part.name} (${`${input.template.id}-${part.id}`.toUpperCase()}, revision ${input.template.version})`,
+    `Material: ${input.material ? input.material.name : part.material}. Quantity ${part.quantity ?? 1}.`,
+    `Full size 1:1, dimensions in ${fmt.unitWord}, ${input.projection} angle projection, general tolerances ISO 2768-${input.generalTolerance}.`,
+  ];
+  lines.forEach((text, i) => {
+    shapes.push({ type: "text", layer: "text", role: "note", at: sheetPoint(b.minX, b.minY - 10 - i * 5), text, heightMm: 2.5, align: "left" });
+  });
+  return shapes;
 }

@@ -56,6 +56,19 @@ export interface ProjectedPart {
   views: ProjectedView[];
 }
 
+/** Where a part's balloon leader points in an assembly view: the projected centre of its placed box. */
+export interface AssemblyAnchor {
+  partId: string;
+  view: ViewName;
+  point: ViewPoint;
+}
+
+/** The assembly projected as one body (parts at their placements), with an anchor per part and view. */
+export interface ProjectedAssembly {
+  views: ProjectedView[];
+  anchors: AssemblyAnchor[];
+}
+
 /** The unit vector of a signed axis. */
 export function axisVector(axis: SignedAxis): { x: number; y: number; z: number } {
   const s = axis[0] === "-" ? -1 : 1;

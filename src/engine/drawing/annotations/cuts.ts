@@ -169,23 +169,36 @@ const BLOCK_FACE_WORDS: Record<Direction, string> = {
 };
 const TURNED_FACE_WORDS: Partial<Record<Direction, string>> = { "+z": "right-hand end", "-z": "left-hand end" };
 
+/** "top face", "top and front faces", "both ends". */
+function faceWords(ctx: AnnotateContext, faces: Direction[]): string {
+  if (ctx.baseKind === "turned") {
+    const ends = faces.filter((f) => f === "+z" || f === "-z");
+    if (ends.length === 2) return "both ends";
+    return TURNED_FACE_WORDS[ends[0] ?? "+z"] ?? "end";
+  }
+  const names = faces.map((f) => BLOCK_FACE_WORDS[f].replace(/ face$/, ""));
+  return names.length === 1 ? `${names[0]} face` : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]} faces`;
+}
+
+/** One callout per chamfer feature, its leader on the first listed face where it is seen edge-on. */
 export function annotateChamfer(f: ChamferFeature, ctx: AnnotateContext, name: string, endRadius: (face: Direction) => number | undefined): AnnotationRequest[] {
-  return f.faces.map((face) => {
-    const fa = axisOf(face);
-    const faceCoord = signOf(face) > 0 ? ctx.bbox.max[fa] : ctx.bbox.min[fa];
-    // Seen edge-on from the front (or from above for the front and back faces).
-    const view: SignedAxis = ctx.baseKind === "turned" ? "+y" : fa === "y" ? "+z" : "-y";
-    const q = AXES3.find((a) => a !== fa && a !== axisOf(view))!;
-    const qEdge = ctx.baseKind === "turned" && fa === "z" ? (endRadius(face) ?? ctx.bbox.max[q]) : ctx.bbox.max[q];
-    const mid = { x: (ctx.bbox.min.x + ctx.bbox.max.x) / 2, y: (ctx.bbox.min.y + ctx.bbox.max.y) / 2, z: (ctx.bbox.min.z + ctx.bbox.max.z) / 2 };
-    const anchor = { ...mid, [fa]: faceCoord - signOf(face) * (f.size / 2), [q]: qEdge - f.size / 2 };
-    const words = (ctx.baseKind === "turned" ? TURNED_FACE_WORDS[face] : undefined) ?? BLOCK_FACE_WORDS[face];
-    return {
+  const face = f.faces[0]!;
+  const fa = axisOf(face);
+  const faceCoord = signOf(face) > 0 ? ctx.bbox.max[fa] : ctx.bbox.min[fa];
+  // Seen edge-on from the front (or from above for the front and back faces).
+  const view: SignedAxis = ctx.baseKind === "turned" ? "+y" : fa === "y" ? "+z" : "-y";
+  const q = AXES3.find((a) => a !== fa && a !== axisOf(view))!;
+  const qEdge = ctx.baseKind === "turned" && fa === "z" ? (endRadius(face) ?? ctx.bbox.max[q]) : ctx.bbox.max[q];
+  const mid = { x: (ctx.bbox.min.x + ctx.bbox.max.x) / 2, y: (ctx.bbox.min.y + ctx.bbox.max.y) / 2, z: (ctx.bbox.min.z + ctx.bbox.max.z) / 2 };
+  const anchor = { ...mid, [fa]: faceCoord - signOf(face) * (f.size / 2), [q]: qEdge - f.size / 2 };
+  const edges = ctx.baseKind === "turned" ? faceWords(ctx, f.faces) : `all edges of ${faceWords(ctx, f.faces)}`;
+  return [
+    {
       kind: "callout" as const,
       feature: name,
       anchor,
-      lines: [`chamfer ${ctx.fmt.length(f.size)} × 45°, all edges of ${words}`],
+      lines: [`chamfer ${ctx.fmt.length(f.size)} × 45°, ${edges}`],
       prefer: [view, ...bothSides(ctx, axisOf(view))],
-    };
-  });
+    },
+  ];
 }

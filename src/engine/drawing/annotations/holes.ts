@@ -3,8 +3,10 @@
  * Each gives the feature's size (a callout on the view that looks into it) and its location (linear
  * dimensions from the datum faces along the two axes across the hole, ISO 129-1 §9 coordinate style).
  */
+import { formatAngle } from "../format";
 import type { Direction, EccentricBoreFeature, HoleFeature, InternalThreadFeature, Point3 } from "../../parts/features";
 import { chamferLine, counterboreLine, countersinkLine, countPrefix, depthWords, sizeWithFit, threadLabel } from "./callouts";
+import { stepRanges } from "./base";
 import { addAlong, axisOf, entryViews, locationFromDatum, otherAxes, signOf, spanRegion, travel } from "./helpers";
 import type { AnnotateContext, AnnotationRequest } from "./types";
 
@@ -48,8 +50,21 @@ function roundFeatureRequests(
   ];
 }
 
+/**
+ * Where a hole really enters: on a turned part a radial (±x, ±y) hole enters at the outside diameter of
+ * the step it crosses, whatever `at` says along its direction (features.ts).
+ */
+export function entryPoint(ctx: AnnotateContext, at: Point3, d: Direction): Point3 {
+  const base = ctx.part.features[0];
+  const h = axisOf(d);
+  if (ctx.baseKind !== "turned" || h === "z" || base?.kind !== "turned") return at;
+  const step = stepRanges(base).find((r) => at.z >= r.z0 - 1e-9 && at.z <= r.z1 + 1e-9) ?? stepRanges(base)[0]!;
+  return { ...at, [h]: -signOf(d) * (step.diameter / 2) };
+}
+
 export function annotateHole(f: HoleFeature, ctx: AnnotateContext, extra: AnnotateExtra): AnnotationRequest[] {
   const fmt = ctx.fmt;
+  f = { ...f, at: entryPoint(ctx, f.at, f.direction) };
   const length = f.through || f.depth === undefined ? throughLength(ctx, f.at, f.direction) : f.depth;
   const finish = f.finish && f.finish !== "drilled" ? ` ${f.finish}` : "";
   const lines = [`${countPrefix(extra.count)}${sizeWithFit(ctx, f.diameter, f.fit)}${finish} ${depthWords(fmt, f.through, f.depth)}`];
@@ -97,7 +112,16 @@ export function annotateEccentricBore(f: EccentricBoreFeature, ctx: AnnotateCont
   if (f.counterbore) lines.push(counterboreLine(fmt, f.counterbore));
   lines.push(`offset ${fmt.length(f.eccentricity)} from the part axis`);
   const outer = Math.max(f.diameter, f.counterbore?.diameter ?? 0) / 2;
-  return roundFeatureRequests(ctx, extra, at, d, f.diameter / 2, outer, length, lines);
+  const requests = roundFeatureRequests(ctx, extra, at, d, f.diameter / 2, outer, length, lines);
+  const deg = ((((f.angleDeg ?? 0) % 360) + 360) % 360);
+  if (Math.abs(deg % 90) < 1e-6 || Math.abs((deg % 90) - 90) < 1e-6) return requests;
+  // Off a centre line: the offset and its angle read better than two small coordinates. Seen from the
+  // right-hand end (+z) the part's +x axis is the upper centre line and +y points left.
+  const cw = -(((deg + 180) % 360) - 180);
+  const words = `${formatAngle(Math.abs(cw))} ${cw > 0 ? "clockwise" : "anticlockwise"} from the upper centre line (seen from the right-hand end)`;
+  return requests
+    .filter((r) => !(r.kind === "linear" && r.role === "location"))
+    .map((r) => (r.kind === "callout" ? { ...r, lines: r.lines.flatMap((l) => (l.startsWith("offset ") ? [l, words] : [l])) } : r));
 }
 
 /** Rounds away floating noise from cos/sin (cos 90° = 6e-17). */

@@ -8,6 +8,7 @@
 import type { CalloutRequest } from "../annotations/types";
 import { sheetPoint, TEXT_HEIGHTS, type SheetShape, type SheetText } from "../model";
 import { projectToView, type ProjectedView } from "../projection";
+import { wrapText } from "../sheet/notes";
 import { textWidthMm } from "../text/measure";
 import { boxesOverlap, segmentHitsBox, type Box } from "./geometry";
 import { arrowhead, line } from "./shapes";
@@ -16,6 +17,7 @@ const TEXT_H = TEXT_HEIGHTS.normal;
 const LINE_PITCH_MM = 4;
 const FIRST_GAP_MM = 6;
 const SHOULDER_MM = 2;
+const MAX_WIDTH_MM = 62;
 
 interface PlacedCallout {
   text: Box;
@@ -41,9 +43,11 @@ function anchorOf(view: ProjectedView, c: CalloutRequest, scale: number): { x: n
  */
 export function layoutCallouts(view: ProjectedView, callouts: CalloutRequest[], scale: number, topEdge: number): SheetShape[] {
   if (callouts.length === 0) return [];
-  const maxLines = Math.max(...callouts.map((c) => c.lines.length));
+  // Long notes wrap so one callout does not push the view off a sheet.
+  const wrapped = callouts.map((c) => ({ ...c, lines: c.lines.flatMap((l) => wrapText(l, MAX_WIDTH_MM, TEXT_H).map((w, i) => (i === 0 ? w : `  ${w}`))) }));
+  const maxLines = Math.max(...wrapped.map((c) => c.lines.length));
   const rowPitch = maxLines * LINE_PITCH_MM + 2;
-  const items = callouts.map((c) => ({ c, anchor: anchorOf(view, c, scale), width: Math.max(...c.lines.map((l) => textWidthMm(l, TEXT_H))) }));
+  const items = wrapped.map((c) => ({ c, anchor: anchorOf(view, c, scale), width: Math.max(...c.lines.map((l) => textWidthMm(l, TEXT_H))) }));
   // Right to left: texts run to the right and leaders rise to the right, so each note further left climbs
   // over the ones already placed instead of through them.
   items.sort((a, b) => b.anchor.x - a.anchor.x);

@@ -17,6 +17,15 @@ export interface PartNoteInput {
   /** The material's own heat-treatment remark and whether it can be hardened in a small shop. */
   material?: { name: string; hardenable: boolean; heatTreatmentNote?: string };
   failingChecks: string[];
+  /** Notes the template prints on every sheet. Those about units or general tolerances are left out: the
+   * drawing writes its own, in the units the user chose. */
+  sheetNotes?: string[];
+}
+
+/** Ends a note with a full stop unless it already ends in punctuation. */
+function sentence(s: string): string {
+  const t = s.trim();
+  return /[.!?:;)]$/.test(t) ? t : `${t}.`;
 }
 
 function features(part: ResolvedPart): ResolvedFeature[] {
@@ -35,13 +44,17 @@ export function partNotes(input: PartNoteInput): string[] {
   if (hasFit) notes.push("Fits (e.g. H7) to ISO 286-1/-2; check reamed and bored sizes with a gauge.");
   const hasThread = all.some((f) => f.kind === "thread");
   if (hasThread) notes.push("Threads ISO metric (ISO 261/965-1), tolerance class 6H internal, 6g external unless stated.");
-  notes.push("Remove burrs and break sharp edges about 0.2 × 45° unless shown otherwise.");
-  if (part.finish) notes.push(`Finish: ${part.finish}.`);
-  if (part.heatTreatment) notes.push(`Heat treatment: ${part.heatTreatment}.`);
+  const own = [...(part.drawing?.notes ?? []), ...(input.sheetNotes ?? []).filter((n) => !/dimensions in|ISO 2768|general tolerance/i.test(n))]
+    .map((n) => n.trim())
+    .filter(Boolean);
+  // The template's own edge note replaces the generated one.
+  if (!own.some((n) => /sharp edge|burr/i.test(n))) notes.push("Remove burrs and break sharp edges about 0.2 × 45° unless shown otherwise.");
+  if (part.finish) notes.push(`Finish: ${sentence(part.finish)}`);
+  if (part.heatTreatment) notes.push(`Heat treatment: ${sentence(part.heatTreatment)}`);
   else if (input.material?.hardenable) {
     notes.push(`Heat treatment: none specified; ${input.material.name.toLowerCase()} can be hardened and tempered where wear calls for it.`);
   }
-  for (const n of part.drawing?.notes ?? []) if (n.trim()) notes.push(n.trim());
+  for (const n of own) if (!notes.includes(sentence(n))) notes.push(sentence(n));
   if (input.failingChecks.length > 0) notes.push(`Template checks failing: ${input.failingChecks.join("; ")}. Do not make this part until they are resolved.`);
   return notes;
 }

@@ -1,0 +1,203 @@
+/**
+ * The assembly sheet: the parts at their assembly placements, projected together (so they hide each
+ * other), arranged by the projection method, with item balloons (ISO 6433: a circle with the item number,
+ * a thin leader ending in a dot on the part) and a parts list above the title block (ISO 7573: item,
+ * quantity, name, material, drawing number, item numbers rising upward from the header).
+ */
+import type { ResolvedPart } from "../parts/features";
+import { arrangeViews } from "./layout/arrange";
+import type { Box } from "./layout/geometry";
+import { emptyBox, unionBox } from "./layout/geometry";
+import { line, shapesBox, translateShapes } from "./layout/shapes";
+import { centreShapes, edgeShapes } from "./layout/viewLines";
+import { sheetPoint, TEXT_HEIGHTS, type DrawingSheet, type SheetShape, type SheetSize } from "./model";
+import { formatMass, sheetRegions, type SheetCommon } from "./partSheet";
+import type { ProjectedAssembly, ViewName } from "./projection";
+import { chooseScale, type DrawingScale } from "./scale";
+import { errorStamp, frame, notesBlock } from "./sheet/notes";
+import { fitText, TITLE_BLOCK_HEIGHT_MM, TITLE_BLOCK_WIDTH_MM, titleBlock } from "./sheet/titleBlock";
+import { frameRect, SHEET_SIZES, sheetSeries } from "./sheets";
+
+export interface AssemblySheetInput extends SheetCommon {
+  parts: ResolvedPart[];
+  projected: ProjectedAssembly;
+  /** Display name of each part's material, by part id. */
+  materialNames: Record<string, string>;
+  totalMassKg?: number;
+}
+
+const BALLOON_RADIUS_MM = 4.5;
+const ROW_H = 6;
+const LIST_COLUMNS = [
+  { title: "Item", width: 12 },
+  { title: "Qty", width: 12 },
+  { title: "Name", width: 56 },
+  { title: "Material", width: 50 },
+  { title: "Drawing number", width: 50 },
+] as const;
+
+/** The parts list rows, item 1 first. */
+function listRows(input: AssemblySheetInput): string[][] {
+  return input.parts.map((p, i) => [
+    String(i + 1),
+    String(p.quantity ?? 1),
+    p.name,
+    input.materialNames[p.id] ?? p.material,
+    `${input.template.id}-${p.id}`.toUpperCase(),
+  ]);
+}
+
+function partsList(rows: string[][], corner: { x: number; y: number }): SheetShape[] {
+  const shapes: SheetShape[] = [];
+  const x0 = corner.x - TITLE_BLOCK_WIDTH_MM;
+  const all = [LIST_COLUMNS.map((c) => c.title), ...rows];
+  all.forEach((cells, r) => {
+    const y = corner.y + r * ROW_H;
+    let x = x0;
+    cells.forEach((cell, c) => {
+      const w = LIST_COLUMNS[c]!.width;
+      shapes.push({ type: "polyline", layer: "frame", closed: true, points: [sheetPoint(x, y), sheetPoint(x + w, y), sheetPoint(x + w, y + ROW_H), sheetPoint(x, y + ROW_H)] });
+      shapes.push({
+        type: "text",
+        layer: "text",
+        role: "table",
+        at: sheetPoint(x + 1.5, y + (ROW_H - TEXT_HEIGHTS.normal) / 2),
+        text: fitText(cell, w - 3, TEXT_HEIGHTS.normal),
+        heightMm: TEXT_HEIGHTS.normal,
+        align: "left",
+        ...(r === 0 ? { weight: "bold" as const } : {}),
+      });
+      x += w;
+    });
+  });
+  return shapes;
+}
+
+interface LaidOut {
+  name: ViewName;
+  shapes: SheetShape[];
+  envelope: Box;
+}
+
+/** One assembly view with its balloons (in the view's preferred place: above it, in anchor order). */
+function layoutAssemblyView(input: AssemblySheetInput, view: ProjectedAssembly["views"][number], scale: number, balloons: { item: number; partId: string }[]): LaidOut {
+  const place = { origin: sheetPoint(0, 0), scale };
+  const lines = [...edgeShapes(view, place), ...centreShapes(view, place)];
+  const box = shapesBox(lines);
+  const shapes = [...lines];
+  const anchors = balloons
+    .map((b) => ({ ...b, at: input.projected.anchors.find((a) => a.partId === b.partId && a.view === view.name)?.point }))
+    .filter((b): b is typeof b & { at: { x: number; y: number } } => !!b.at)
+    .map((b) => ({ ...b, x: b.at.x * scale, y: b.at.y * scale }))
+    .sort((a, b) => a.x - b.x);
+  let lastX = -Infinity;
+  const cy = box.maxY + 12;
+  for (const a of anchors) {
+    const cx = Math.max(a.x + 6, lastX + 2 * BALLOON_RADIUS_MM + 3);
+    lastX = cx;
+    const len = Math.hypot(cx - a.x, cy - a.y);
+    const ux = (a.x - cx) / len;
+    const uy = (a.y - cy) / len;
+    shapes.push({ type: "circle", layer: "dimension", centre: sheetPoint(cx, cy), radius: BALLOON_RADIUS_MM });
+    shapes.push({
+      type: "text",
+      layer: "dimension",
+      role: "label",
+      at: sheetPoint(cx, cy - TEXT_HEIGHTS.large / 2),
+      text: String(a.item),
+      heightMm: TEXT_HEIGHTS.large,
+      align: "centre",
+    });
+    shapes.push(line("dimension", sheetPoint(cx + ux * BALLOON_RADIUS_MM, cy + uy * BALLOON_RADIUS_MM), sheetPoint(a.x, a.y)));
+    shapes.push({ type: "circle", layer: "dimension", centre: sheetPoint(a.x, a.y), radius: 0.35 });
+    shapes.push({
+      type: "fill",
+      layer: "dimension",
+      points: Array.from({ length: 8 }, (_, k) => sheetPoint(a.x + 0.5 * Math.cos((k * Math.PI) / 4), a.y + 0.5 * Math.sin((k * Math.PI) / 4))),
+    });
+  }
+  return { name: view.name, shapes, envelope: shapesBox(shapes) };
+}
+
+export function buildAssemblySheet(input: AssemblySheetInput): DrawingSheet {
+  const rows = listRows(input);
+  const listHeight = (rows.length + 1) * ROW_H;
+  const stamped = input.failingChecks.length > 0;
+  const notes = [
+    `Dimensions in ${input.units === "mm" ? "mm" : "inches"}. Assembly for reference: make each part from its own drawing.`,
+    `General tolerances ISO 2768-${input.generalTolerance} on the part drawings.`,
+    "Check the assembly moves freely and clamps before it is used on the machine; follow the machine maker's guidance.",
+    ...(stamped ? [`Template checks failing: ${input.failingChecks.join("; ")}.`] : []),
+  ];
+  // Balloons go in the front view; parts that the front view does not show fall back to the next view.
+  const balloonsByView = new Map<ViewName, { item: number; partId: string }[]>();
+  const viewNames = input.projected.views.map((v) => v.name);
+  input.parts.forEach((p, i) => {
+    const v = viewNames[0]!;
+    const list = balloonsByView.get(v) ?? [];
+    list.push({ item: i + 1, partId: p.id });
+    balloonsByView.set(v, list);
+  });
+  const layoutAt = (s: DrawingScale) => {
+    const views = input.projected.views.map((v) => layoutAssemblyView(input, v, s.factor, balloonsByView.get(v.name) ?? []));
+    return { views, arranged: arrangeViews(new Map(views.map((v) => [v.name, v.envelope])), input.projection) };
+  };
+  const area = (size: SheetSize) => {
+    const r = sheetRegions(size, notes, stamped, listHeight + 2);
+    return { box: r.area, notesWidth: r.notesWidth, notesCorner: r.notesCorner, stampCentre: r.stampCentre };
+  };
+  const candidates = input.sheetSize ? [SHEET_SIZES[input.sheetSize]] : sheetSeries(input.units);
+  let chosen: { size: SheetSize; scale: DrawingScale } | undefined;
+  for (const size of candidates) {
+    const a = area(size).box;
+    const scale = chooseScale((s) => {
+      const b = layoutAt(s).arranged.box;
+      return b.maxX - b.minX <= a.maxX - a.minX && b.maxY - b.minY <= a.maxY - a.minY;
+    });
+    if (scale && (!chosen || scale.factor > chosen.scale.factor)) chosen = { size, scale };
+    // A bigger sheet only when the smaller one forces a reduction.
+    if (chosen && chosen.scale.factor >= 1) break;
+  }
+  const { size, scale } = chosen ?? { size: candidates[candidates.length - 1]!, scale: { factor: 0.02, label: "1:50" } };
+  const set = layoutAt(scale);
+  const { box: drawArea, notesWidth, notesCorner, stampCentre } = area(size);
+  const { min, max } = frameRect(size);
+  const shapes: SheetShape[] = [...frame(size)];
+  shapes.push(
+    ...titleBlock(
+      {
+        title: `${input.template.name}: assembly`,
+        documentType: `Assembly drawing, ${input.template.name} v${input.template.version}`,
+        drawingNumber: `${input.template.id}-ASSEMBLY`.toUpperCase(),
+        revision: input.template.version,
+        owner: input.owner,
+        material: "see parts list",
+        mass: formatMass(input.totalMassKg, input.units),
+        generalTolerance: `ISO 2768-${input.generalTolerance}`,
+        units: input.units === "mm" ? "mm" : "inch",
+        scale: scale.label,
+        projection: input.projection,
+        drawnBy: input.drawnBy,
+        date: input.date,
+        approved: stamped ? "NOT CHECKED" : "—",
+        sheet: `${input.sheetNumber ?? 1} of ${input.sheetCount ?? 1}`,
+      },
+      sheetPoint(max.x, min.y),
+    ),
+  );
+  shapes.push(...partsList(rows, { x: max.x, y: min.y + TITLE_BLOCK_HEIGHT_MM }));
+  shapes.push(...notesBlock(notes, notesCorner, notesWidth));
+  if (stampCentre) shapes.push(...errorStamp(stampCentre));
+  let all = emptyBox();
+  for (const v of set.views) {
+    const o = set.arranged.offsets.get(v.name)!;
+    all = unionBox(all, { minX: v.envelope.minX + o.dx, maxX: v.envelope.maxX + o.dx, minY: v.envelope.minY + o.dy, maxY: v.envelope.maxY + o.dy });
+  }
+  const dx = (drawArea.minX + drawArea.maxX) / 2 - (all.minX + all.maxX) / 2;
+  const dy = (drawArea.minY + drawArea.maxY) / 2 - (all.minY + all.maxY) / 2;
+  for (const v of set.views) {
+    const o = set.arranged.offsets.get(v.name)!;
+    shapes.push(...translateShapes(v.shapes, o.dx + dx, o.dy + dy));
+  }
+  return { id: "assembly", kind: "assembly", size, scaleLabel: scale.label, shapes, sheetNumber: input.sheetNumber ?? 1, sheetCount: input.sheetCount ?? 1 };
+}
