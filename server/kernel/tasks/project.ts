@@ -1,0 +1,61 @@
+import type { Shape3D } from "replicad";
+import type { ResolvedPart } from "@/engine/parts/features";
+import { projectToView, type AssemblyAnchor, type ProjectedAssembly, type ProjectedPart, type ViewName } from "@/engine/drawing/projection";
+import { viewFrame, viewsForPart } from "@/engine/drawing/views";
+import { assemblyMatrix, transformPoint } from "../placement";
+import { projectShape } from "../projection/projectShape";
+import { placedCopy } from "../step";
+import { defineTask } from "./types";
+
+export interface ProjectTaskInput {
+  /** Parts drawn one per sheet, each in its own frame with the views `viewsForPart` gives it. */
+  parts: ResolvedPart[];
+  /** Also project these parts together at their assembly placements (the assembly sheet). */
+  assembly?: { parts: ResolvedPart[]; views?: ViewName[] };
+}
+
+export interface ProjectTaskOutput {
+  parts: ProjectedPart[];
+  assembly?: ProjectedAssembly;
+}
+
+/**
+ * Orthographic views with exact hidden lines (HLRBRep through `oc`, see projection/hlr.ts) and centre
+ * marks, for the drawings. The assembly is projected as one compound of placed copies, so parts hide
+ * each other as they do on the bench.
+ */
+export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
+  name: "project",
+  run(input, ctx) {
+    const parts = input.parts.map((part) => {
+      const built = ctx.buildPart(part);
+      return { partId: part.id, views: projectShape(ctx.oc, built.shape.wrapped, viewsForPart(part)) };
+    });
+    if (!input.assembly || input.assembly.parts.length === 0) return { parts };
+    const names = input.assembly.views ?? ["front", "top", "right"];
+    const frames = names.map((n) => viewFrame("block", n));
+    const copies: Shape3D[] = [];
+    const anchors: AssemblyAnchor[] = [];
+    try {
+      for (const part of input.assembly.parts) {
+        const built = ctx.buildPart(part);
+        copies.push(placedCopy(built.shape, part));
+        const [x, y, z] = transformPoint(
+          assemblyMatrix(part),
+          (built.bbox.min[0] + built.bbox.max[0]) / 2,
+          (built.bbox.min[1] + built.bbox.max[1]) / 2,
+          (built.bbox.min[2] + built.bbox.max[2]) / 2,
+        );
+        for (const f of frames) anchors.push({ partId: part.id, view: f.name, point: projectToView(f, { x, y, z }) });
+      }
+      const compound = ctx.r.makeCompound(copies);
+      try {
+        return { parts, assembly: { views: projectShape(ctx.oc, compound.wrapped, frames), anchors } };
+      } finally {
+        compound.delete();
+      }
+    } finally {
+      copies.forEach((c) => c.delete());
+    }
+  },
+});
