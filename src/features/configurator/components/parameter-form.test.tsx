@@ -1,6 +1,6 @@
 import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { useForm } from "react-hook-form";
+import { useForm, type Resolver } from "react-hook-form";
 import { afterEach, describe, expect, it } from "vitest";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { LengthUnit } from "@/engine/units";
@@ -18,7 +18,9 @@ function Harness({ units }: { units: LengthUnit }) {
   const form = useForm<FormValues>({
     defaultValues: state.values,
     mode: "onChange",
-    resolver: zodResolver(buildFormSchema(specs, "mm", units, () => state.exact)),
+    resolver: zodResolver(
+      buildFormSchema(specs, "mm", units, () => state.exact),
+    ) as unknown as Resolver<FormValues>,
   });
   return (
     <ParameterForm
