@@ -21,6 +21,8 @@ import { machinesRouter, visesRouter } from "@server/modules/profiles/router";
 import { createDesignService, designsRouter, sharedRouter, storeCatalogue, type TemplateCatalogue } from "@server/modules/designs";
 import { templatesRouter, templatesService } from "@server/modules/templates";
 import { calculatorsRouter, calculatorsService } from "@server/modules/calculators";
+import { modelRouter, modelService } from "@server/modules/model";
+import type { KernelPool } from "@server/kernel";
 import { builtInTemplates, type TemplateStore } from "@server/templates";
 
 /**
@@ -38,6 +40,10 @@ export interface AppDeps {
   templateCatalogue?: TemplateCatalogue;
   /** The compiled template catalogue (defaults to the built-in templates, loaded once; a broken one fails start-up). */
   templates?: TemplateStore;
+  /** The solid kernel's worker pool (server/kernel); without it the 3D model routes answer 503. */
+  kernel?: KernelPool;
+  /** Size of the encoded 3D-model cache, MB. */
+  modelCacheMb?: number;
 }
 
 /** JSON bodies above this are refused with 413. Routes taking uploads set their own limit. */
@@ -105,6 +111,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use("/api/shared", sharedRouter(designs));
   app.use("/api/templates", templatesRouter(templatesService(templateStore)));
   app.use("/api/calculators", calculatorsRouter(calculatorsService()));
+  app.use("/api/templates", modelRouter(modelService({ templates: deps.templates ?? builtInTemplates(), kernel: deps.kernel, cacheMb: deps.modelCacheMb })));
   // --- end feature routers ---
 
   app.use("/api", notFoundHandler);
