@@ -61,7 +61,7 @@ export function DetailsForm({
     <div className="space-y-3" onKeyDown={onKeyDown}>
       <div className="space-y-1">
         <label htmlFor={`${id}-name`} className="font-semibold">
-          Name
+          Design name
         </label>
         <input
           id={`${id}-name`}
