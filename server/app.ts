@@ -22,6 +22,7 @@ import { createDesignService, designsRouter, sharedRouter, storeCatalogue, type 
 import { templatesRouter, templatesService } from "@server/modules/templates";
 import { calculatorsRouter, calculatorsService } from "@server/modules/calculators";
 import { modelRouter, modelService } from "@server/modules/model";
+import { exportRouter, exportService } from "@server/modules/exports";
 import type { KernelPool } from "@server/kernel";
 import { builtInTemplates, type TemplateStore } from "@server/templates";
 
@@ -111,7 +112,8 @@ export function createApp(deps: AppDeps): express.Express {
   app.use("/api/shared", sharedRouter(designs));
   app.use("/api/templates", templatesRouter(templatesService(templateStore)));
   app.use("/api/calculators", calculatorsRouter(calculatorsService()));
-  app.use("/api/templates", modelRouter(modelService({ templates: deps.templates ?? builtInTemplates(), kernel: deps.kernel, cacheMb: deps.modelCacheMb })));
+  app.use("/api/templates", modelRouter(modelService({ templates: templateStore, kernel: deps.kernel, cacheMb: deps.modelCacheMb })));
+  app.use("/api/templates", exportRouter(exportService({ templates: deps.templates ?? builtInTemplates(), kernel: deps.kernel })));
   // --- end feature routers ---
 
   app.use("/api", notFoundHandler);

@@ -13,6 +13,7 @@ import { loadConfig, type AppConfig } from "./config";
 import { createDatabase } from "./db";
 import { createLogger } from "./lib/logger";
 import type { SessionLayer } from "./modules/auth/session";
+import { createKernelPool, kernelConfigFromEnv } from "./kernel";
 
 export interface RunningServer {
   url: string;
@@ -22,7 +23,10 @@ export interface RunningServer {
 export async function startServer(config: AppConfig = loadConfig()): Promise<RunningServer> {
   const logger = createLogger(config.logLevel);
   const db = createDatabase(config.db, logger);
-  const app = createApp({ config, db, logger });
+  // Solid-kernel workers (KERNEL_* variables; DEVELOPERS.md "Solid kernel"); they warm up in the background.
+  const kernelConfig = kernelConfigFromEnv();
+  const kernel = createKernelPool(kernelConfig, logger.child({ area: "kernel" }));
+  const app = createApp({ config, db, logger, kernel, modelCacheMb: kernelConfig.modelCacheMb });
   const server = http.createServer(app);
   server.keepAliveTimeout = 5000;
   await new Promise<void>((resolve, reject) => {
@@ -47,6 +51,7 @@ export async function startServer(config: AppConfig = loadConfig()): Promise<Run
       clearTimeout(force);
       (app.locals.sessionLayer as SessionLayer | undefined)?.close();
       await db.close();
+      await kernel.close();
     })());
   return { url, close };
 }

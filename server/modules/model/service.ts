@@ -1,0 +1,162 @@
+/**
+ * The 3D model of a configured template: evaluate the parameters, refuse unbuildable parts before the
+ * kernel, build and mesh every part on the kernel pool, and encode the answer (src/shared/model.ts).
+ * Encoded answers are cached by {@link modelCacheKey} (template id, version, parameters in mm), and
+ * identical requests in flight share one kernel job.
+ */
+import { evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type Evaluation } from "@/engine";
+import { getMaterial, isMaterialKey } from "@/engine/materials";
+import { partMassKgOrUndefined } from "@/engine/parts/analytic";
+import type { ResolvedPart } from "@/engine/parts/features";
+import { materialColour, type ModelPart, type ModelResponse } from "@/shared/model";
+import type { EvaluateRequest } from "@/shared/templates";
+import { type KernelPool, type ModelTaskOutput } from "@server/kernel";
+import { createResultCache, modelCacheKey } from "@server/kernel/model-cache";
+import { assemblyMatrix, explodedMatrix } from "@server/kernel/placement";
+import { validatePartForKernel } from "@server/kernel/validate";
+import { badRequest, HttpError, notFound } from "@server/lib/errors";
+import type { TemplateStore } from "@server/templates";
+import { kernelErrorToHttp } from "./kernel-http";
+
+export interface ModelServiceDeps {
+  templates: TemplateStore;
+  /** Absent: the model routes answer 503 (e.g. a server started without kernel workers). */
+  kernel?: KernelPool;
+  /** Size of the encoded-model cache, MB (default 64). */
+  cacheMb?: number;
+}
+
+/** What a kernel job for a configured template needs, after evaluation and the pre-kernel guard. */
+export interface PreparedModel {
+  compiled: CompiledTemplate;
+  evaluation: Evaluation;
+  /** Parts to build (all of them: an unbuildable part refuses the whole request). */
+  parts: ResolvedPart[];
+  cacheKey: string;
+}
+
+const b64 = (a: Float32Array | Uint32Array) => Buffer.from(a.buffer, a.byteOffset, a.byteLength).toString("base64");
+
+export function modelService(deps: ModelServiceDeps) {
+  const cache = createResultCache<string>(deps.cacheMb ?? 64);
+  const inflight = new Map<string, Promise<string>>();
+
+  const find = (id: string): CompiledTemplate => {
+    const compiled = deps.templates.get(id);
+    if (!compiled) throw notFound(`There is no template "${id}".`);
+    return compiled;
+  };
+
+  /** Evaluates and guards; throws 404/400 HttpErrors. Shared with the download routes. */
+  function prepare(id: string, body: EvaluateRequest): PreparedModel {
+    const compiled = find(id);
+    let evaluation: Evaluation;
+    try {
+      evaluation = evaluateTemplate(compiled, { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
+    } catch (err) {
+      if (err instanceof ParameterResolutionError) {
+        throw badRequest(err.issues.length === 1 ? err.issues[0]!.message : "Some parameters are not acceptable.", err.issues.map((i) => ({ path: i.path, message: i.message })));
+      }
+      throw err;
+    }
+    if (!evaluation.buildable) {
+      const issues = evaluation.geometryIssues.filter((i) => i.blocking);
+      throw badRequest(
+        issues.length === 1 ? issues[0]!.message : "These parameters give parts that cannot be made; see the details.",
+        issues.map((i) => ({ path: `parts.${i.partId}${i.featureIndex !== undefined ? `.features.${i.featureIndex}` : ""}`, message: i.message })),
+      );
+    }
+    // The kernel's own guard, on this thread: a degenerate part never reaches a worker.
+    try {
+      for (const part of evaluation.parts) validatePartForKernel(part);
+    } catch (err) {
+      throw kernelErrorToHttp(err);
+    }
+    const t = compiled.template;
+    return { compiled, evaluation, parts: evaluation.parts, cacheKey: modelCacheKey(t.id, t.version, evaluation.parametersMm) };
+  }
+
+  async function build(prepared: PreparedModel): Promise<string> {
+    if (!deps.kernel) throw new HttpError("service_unavailable", "The solid modeller is not running on this server.");
+    let out: ModelTaskOutput;
+    try {
+      out = await deps.kernel.run<ModelTaskOutput>("model", { parts: prepared.parts });
+    } catch (err) {
+      throw kernelErrorToHttp(err);
+    }
+    const { evaluation } = prepared;
+    const summaries = new Map(evaluation.partSummaries.map((s) => [s.id, s]));
+    const parts: ModelPart[] = prepared.parts.map((part, i) => {
+      const built = out.parts[i]!;
+      const mesh = built.mesh!;
+      const summary = summaries.get(part.id);
+      const massKg = partMassKgOrUndefined(part, built.volumeMm3);
+      return {
+        id: part.id,
+        name: part.name,
+        material: part.material,
+        ...(isMaterialKey(part.material) ? { materialName: getMaterial(part.material).name } : {}),
+        colour: materialColour(part.material),
+        quantity: Math.max(1, Math.round(summary?.quantity ?? part.quantity ?? 1)),
+        bboxMm: built.bbox,
+        volumeMm3: built.volumeMm3,
+        massKg: massKg ?? null,
+        valid: true,
+        mesh: {
+          positions: b64(mesh.positions),
+          normals: b64(mesh.normals),
+          indices: b64(mesh.indices),
+          edges: b64(mesh.edges),
+          vertexCount: mesh.positions.length / 3,
+          triangleCount: mesh.indices.length / 3,
+        },
+        assembly: assemblyMatrix(part),
+        exploded: explodedMatrix(part),
+        threads: built.threads,
+      };
+    });
+    const body: Omit<ModelResponse, "units"> = {
+      template: { id: prepared.compiled.template.id, version: prepared.compiled.template.version },
+      cacheKey: prepared.cacheKey,
+      parts,
+      fixtures: evaluation.assembly.fixtures.map((f) => ({ id: f.id, label: f.label, positionMm: f.positionMm, sizeMm: f.sizeMm })),
+    };
+    return JSON.stringify(body);
+  }
+
+  return {
+    has: (id: string) => deps.templates.get(id) !== undefined,
+    find,
+    prepare,
+
+    /**
+     * The encoded model (JSON text of {@link ModelResponse}) for these parameters; from the cache when the
+     * same template, version and normalised parameters were built before. Identical requests in flight
+     * share one kernel job (so a job is not cancelled when one of its callers goes away).
+     */
+    async modelJson(id: string, body: EvaluateRequest): Promise<{ json: string; cacheKey: string; cached: boolean }> {
+      const prepared = prepare(id, body);
+      const units = body.units ?? prepared.compiled.template.units;
+      const withUnits = (rest: string) => `{"units":${JSON.stringify(units)},${rest.slice(1)}`;
+      const hit = cache.get(prepared.cacheKey);
+      if (hit !== undefined) return { json: withUnits(hit), cacheKey: prepared.cacheKey, cached: true };
+      let job = inflight.get(prepared.cacheKey);
+      if (!job) {
+        job = build(prepared).then(
+          (json) => {
+            cache.set(prepared.cacheKey, json);
+            return json;
+          },
+        );
+        job.finally(() => inflight.delete(prepared.cacheKey)).catch(() => undefined);
+        inflight.set(prepared.cacheKey, job);
+      }
+      return { json: withUnits(await job), cacheKey: prepared.cacheKey, cached: false };
+    },
+
+    /** How many encoded models the cache holds, and their size (for health and benchmarks). */
+    cacheStats: () => ({ entries: cache.size, bytes: cache.calculatedSize }),
+  };
+}
+
+export type ModelService = ReturnType<typeof modelService>;
