@@ -102,6 +102,10 @@ describe.each(roles)("a signed-in %s", (role: Role) => {
     expect(deleteDesignResponseSchema.parse(del.body).deleted.id).toBe(d.id);
     expect((await agent.get(`/api/designs/${d.id}`)).status).toBe(404);
     expect((await listOf(agent)).map((x) => x.id)).toEqual([copy.id]);
+
+    const restored = await agent.post(`/api/designs/${d.id}/restore`);
+    expect(restored.status).toBe(200);
+    expect((await listOf(agent)).map((x) => x.id).sort()).toEqual([d.id, copy.id].sort());
   });
 });
 

@@ -65,9 +65,14 @@ describe("making a share link", () => {
     expect(tokens.size).toBe(5);
   });
 
-  it.each(roles)("works for a %s", async (role) => {
+  it.each(roles)("works for a %s, who can also revoke it", async (role) => {
     const { agent, design } = await ownerWithDesign(role);
-    expect((await agent.post(`/api/designs/${design.id}/share`)).status).toBe(201);
+    const made = await agent.post(`/api/designs/${design.id}/share`);
+    expect(made.status).toBe(201);
+    const { token } = shareResponseSchema.parse(made.body);
+    expect((await stranger().get(`/api/shared/${token}`)).status).toBe(200);
+    expect((await agent.delete(`/api/designs/${design.id}/share`)).status).toBe(204);
+    expect((await stranger().get(`/api/shared/${token}`)).status).toBe(404);
   });
 });
 
