@@ -66,7 +66,7 @@ describe("soft jaws, other parameter sets", () => {
     expect(analysis<Record<string, number>>(e, "cb").counterboreDiameterMm).toBe(15);
     expect(analysis<Record<string, number>>(e, "screwThread").recommendedEngagementMm).toBe(8);
     expect(analysis<Record<string, number>>(e, "vRound").contactAboveApexMm).toBeCloseTo(12.5 / Math.SQRT2, 9);
-    expect(analysis<Record<string, number>>(e, "vRound").centreAboveApexMm - 10).toBeCloseTo(12.5 * Math.SQRT2 - 10, 9);
+    expect(analysis<Record<string, number>>(e, "vRound").centreAboveApexMm! - 10).toBeCloseTo(12.5 * Math.SQRT2 - 10, 9);
     const expected = 100 * 16 * 30 - 2 * counterboredHole(9, 16, 15, 8.5) - 10 * 10 * 1 * 30;
     expect(partVolumeMm3(part(e, "jaw"))).toBeCloseTo(expected, 6);
     expect(summary(e, "jaw").massKg).toBeCloseTo(expected * 7850e-9, 9);
