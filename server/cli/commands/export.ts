@@ -12,7 +12,7 @@ import path from "node:path";
 import { evaluateTemplate } from "@/engine/evaluate";
 import { ParameterResolutionError } from "@/engine/parameters";
 import { buildExport, EXPORT_FORMATS, ExportInputError, type ExportFormat } from "@server/exporters/build-export";
-import { builtInTemplate, builtInTemplates } from "@server/exporters/template-files";
+import { builtInTemplates } from "@server/templates";
 import { createInProcessKernel, KernelError } from "@server/kernel";
 import { CliUsageError, parseArgs, rejectUnknown, single, type CliCommand } from "../args";
 
@@ -66,8 +66,9 @@ export const exportCommand: CliCommand = {
     const [templateId, ...extra] = parsed.positional;
     if (!templateId) throw new CliUsageError(`Name a template.\nUsage: npm run -s cli -- ${USAGE}`);
     if (extra.length > 0) throw new CliUsageError(`Unexpected argument${extra.length > 1 ? "s" : ""}: ${extra.join(" ")}.`);
-    const template = builtInTemplate(templateId);
-    if (!template) throw new CliUsageError(`There is no template "${templateId}". Templates: ${[...builtInTemplates().keys()].join(", ")}.`);
+    const compiled = builtInTemplates().get(templateId);
+    if (!compiled) throw new CliUsageError(`There is no template "${templateId}". Templates: ${builtInTemplates().list().map((t) => t.template.id).join(", ")}.`);
+    const template = compiled.template;
     const format = choice<ExportFormat>(single(parsed, "format"), EXPORT_FORMATS, "format");
     const units = choice(single(parsed, "units"), ["mm", "in"] as const, "units", template.units);
     const projection = choice(single(parsed, "projection"), ["first", "third"] as const, "projection", units === "in" ? "third" : "first");
@@ -77,7 +78,7 @@ export const exportCommand: CliCommand = {
 
     let evaluation;
     try {
-      evaluation = evaluateTemplate(template, { parameters, units });
+      evaluation = evaluateTemplate(compiled, { parameters, units });
     } catch (err) {
       if (err instanceof ParameterResolutionError) throw new CliUsageError(err.message);
       throw err;

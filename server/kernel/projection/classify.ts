@@ -34,7 +34,8 @@ export function circumcentre(a: ViewPoint, b: ViewPoint, c: ViewPoint): ViewPoin
 /** Angle of p around c in degrees, in [0, 360). */
 export function angleDeg(c: ViewPoint, p: ViewPoint): number {
   const a = (Math.atan2(p.y - c.y, p.x - c.x) * 180) / Math.PI;
-  return a < 0 ? a + 360 : a;
+  // A point a hair below the +x axis is at 0°, not 359.99999°.
+  return a < -1e-7 ? a + 360 : Math.max(a, 0);
 }
 
 /** Normalises an angle to [0, 360). */

@@ -1,0 +1,2 @@
+export { exportRouter } from "./router";
+export { exportService, type ExportService, type TemplateExportRequest } from "./service";

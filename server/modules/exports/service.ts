@@ -1,0 +1,94 @@
+/**
+ * Downloads of a configured template: evaluate the parameters, refuse parts that cannot be made, then
+ * build the file with the pack service (server/exporters/build-export.ts), which other routes (saved
+ * designs) call the same way.
+ */
+import { evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type Evaluation } from "@/engine";
+import type { KernelPool } from "@server/kernel";
+import { validatePartForKernel } from "@server/kernel/validate";
+import { buildExport, ExportInputError, type ExportFile, type ExportFormat } from "@server/exporters/build-export";
+import { badRequest, HttpError, notFound } from "@server/lib/errors";
+import { kernelErrorToHttp } from "@server/modules/model";
+import type { TemplateStore } from "@server/templates";
+
+export interface ExportServiceDeps {
+  templates: TemplateStore;
+  /** Without a kernel the downloads answer 503. */
+  kernel?: KernelPool;
+}
+
+export interface TemplateExportRequest {
+  parameters: Record<string, number | string | boolean>;
+  units?: "mm" | "in";
+  projection?: "first" | "third";
+  format: ExportFormat;
+  part?: string;
+  drawnBy: string;
+  date: string;
+  signal?: AbortSignal;
+}
+
+export function exportService(deps: ExportServiceDeps) {
+  const find = (id: string): CompiledTemplate => {
+    const compiled = deps.templates.get(id);
+    if (!compiled) throw notFound(`There is no template "${id.slice(0, 60)}".`);
+    return compiled;
+  };
+
+  function evaluate(compiled: CompiledTemplate, req: TemplateExportRequest): Evaluation {
+    let evaluation: Evaluation;
+    try {
+      evaluation = evaluateTemplate(compiled, { parameters: req.parameters, ...(req.units ? { units: req.units } : {}) });
+    } catch (err) {
+      if (err instanceof ParameterResolutionError) {
+        throw badRequest(err.issues.length === 1 ? err.issues[0]!.message : "Some parameters are not acceptable.", err.issues.map((i) => ({ path: i.path, message: i.message })));
+      }
+      throw err;
+    }
+    if (!evaluation.buildable) {
+      const issues = evaluation.geometryIssues.filter((i) => i.blocking);
+      throw badRequest(
+        issues.length === 1 ? issues[0]!.message : "These parameters give parts that cannot be made; see the details.",
+        issues.map((i) => ({ path: `parts.${i.partId}${i.featureIndex !== undefined ? `.features.${i.featureIndex}` : ""}`, message: i.message })),
+      );
+    }
+    try {
+      for (const part of evaluation.parts) validatePartForKernel(part);
+    } catch (err) {
+      throw kernelErrorToHttp(err);
+    }
+    return evaluation;
+  }
+
+  return {
+    has: (id: string) => deps.templates.get(id) !== undefined,
+    find,
+    /** The file for a template configuration; HttpErrors for everything the caller can fix. */
+    async exportTemplate(id: string, req: TemplateExportRequest): Promise<ExportFile> {
+      const compiled = find(id);
+      const evaluation = evaluate(compiled, req);
+      if (!deps.kernel) throw new HttpError("service_unavailable", "The solid modeller is not running on this server.");
+      const units = req.units ?? compiled.template.units;
+      try {
+        return await buildExport(
+          {
+            template: compiled.template,
+            evaluation,
+            format: req.format,
+            units,
+            projection: req.projection ?? (units === "in" ? "third" : "first"),
+            ...(req.part ? { part: req.part } : {}),
+            drawnBy: req.drawnBy,
+            date: req.date,
+          },
+          { kernel: deps.kernel, ...(req.signal ? { signal: req.signal } : {}) },
+        );
+      } catch (err) {
+        if (err instanceof ExportInputError) throw badRequest(err.message, [{ path: err.field, message: err.message }]);
+        throw kernelErrorToHttp(err);
+      }
+    },
+  };
+}
+
+export type ExportService = ReturnType<typeof exportService>;
