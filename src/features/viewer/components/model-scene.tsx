@@ -34,8 +34,8 @@ function PartMesh({ part, exploded }: { part: PreviewPart; exploded: boolean }) 
       <mesh geometry={geometry}>
         <meshStandardMaterial
           color={part.colour}
-          metalness={0.35}
-          roughness={0.5}
+          metalness={0.15}
+          roughness={0.55}
           polygonOffset
           polygonOffsetFactor={1}
           polygonOffsetUnits={1}
@@ -101,7 +101,8 @@ export function ModelScene({
       const direction = command.view
         ? viewDirections[command.view]
         : camera.position.clone().sub(target).normalize();
-      const centre = fitCamera(camera, box, direction.lengthSq() > 0 ? direction : viewDirections.iso);
+      // Frame the parts (the ghosted jaw may run past the edges, as in a photograph of the real set-up).
+      const centre = fitCamera(camera, box, direction.lengthSq() > 0 ? direction : viewDirections.iso, 1.25);
       if (centre) target.copy(centre);
     }
     controls.current?.update();
@@ -114,17 +115,17 @@ export function ModelScene({
 
   return (
     <>
-      <hemisphereLight args={["#f3f5f6", "#3f484f", 0.9]} />
-      <directionalLight position={[300, -400, 600]} intensity={2.2} />
-      <directionalLight position={[-400, 300, 200]} intensity={0.7} />
+      <hemisphereLight args={["#ffffff", "#66727c", 1.6]} position={[0, 0, 1]} />
+      <directionalLight position={[300, -400, 600]} intensity={2.6} />
+      <directionalLight position={[-400, 300, 200]} intensity={1} />
       <group ref={group}>
         {parts.map((p) => (
           <PartMesh key={p.id} part={p} exploded={exploded} />
         ))}
-        {fixtures.map((f) => (
-          <FixtureGhost key={f.id} fixture={f} />
-        ))}
       </group>
+      {fixtures.map((f) => (
+        <FixtureGhost key={f.id} fixture={f} />
+      ))}
       <OrbitControls ref={controls} makeDefault enableDamping={false} />
     </>
   );

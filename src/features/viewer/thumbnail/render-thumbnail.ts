@@ -4,13 +4,13 @@
  * through a dynamic import, so three.js never enters the catalogue's first bundle.
  */
 import {
-  AmbientLight,
   Box3,
   BoxGeometry,
   Color,
   DirectionalLight,
   EdgesGeometry,
   Group,
+  HemisphereLight,
   LineBasicMaterial,
   LineSegments,
   Mesh,
@@ -47,11 +47,14 @@ function getRenderer(): WebGLRenderer {
 function draw(model: PreviewModel): string {
   const r = getRenderer();
   const scene = new Scene();
-  scene.add(new AmbientLight(0xffffff, 0.9));
-  const key = new DirectionalLight(0xffffff, 2.2);
+  // Sky from +z: the assembly frame has z up.
+  const sky = new HemisphereLight(0xffffff, 0x66727c, 1.6);
+  sky.position.set(0, 0, 1);
+  scene.add(sky);
+  const key = new DirectionalLight(0xffffff, 2.6);
   key.position.set(300, -400, 600);
   scene.add(key);
-  const fill = new DirectionalLight(0xffffff, 0.7);
+  const fill = new DirectionalLight(0xffffff, 1);
   fill.position.set(-400, 300, 200);
   scene.add(fill);
 
@@ -64,8 +67,8 @@ function draw(model: PreviewModel): string {
     const geometry = partGeometry(part);
     const material = new MeshStandardMaterial({
       color: new Color(part.colour),
-      metalness: 0.35,
-      roughness: 0.5,
+      metalness: 0.15,
+      roughness: 0.55,
       polygonOffset: true,
       polygonOffsetFactor: 1,
       polygonOffsetUnits: 1,
@@ -104,7 +107,7 @@ function draw(model: PreviewModel): string {
   const camera = new PerspectiveCamera(30, thumbnailSize.width / thumbnailSize.height, 1, 10_000);
   camera.up.set(0, 0, 1);
   // Frame the parts themselves; the ghosted jaw may run off the edge, as in a photograph of the real thing.
-  fitCamera(camera, partsBox, viewDirections.iso, 1.05);
+  fitCamera(camera, partsBox, viewDirections.iso, 1.1);
   r.setClearColor(0x000000, 0);
   r.render(scene, camera);
   const url = r.domElement.toDataURL("image/png");
