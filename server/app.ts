@@ -18,7 +18,14 @@ import { authRouter } from "@server/modules/auth/router";
 import { adminService } from "@server/modules/admin/service";
 import { adminRouter } from "@server/modules/admin/router";
 import { machinesRouter, visesRouter } from "@server/modules/profiles/router";
-import { createDesignService, designsRouter, sharedRouter, storeCatalogue, type TemplateCatalogue } from "@server/modules/designs";
+import {
+  createDesignExports,
+  createDesignService,
+  designsRouter,
+  sharedRouter,
+  storeCatalogue,
+  type TemplateCatalogue,
+} from "@server/modules/designs";
 import { templatesRouter, templatesService } from "@server/modules/templates";
 import { calculatorsRouter, calculatorsService } from "@server/modules/calculators";
 import { modelRouter, modelService } from "@server/modules/model";
@@ -108,7 +115,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use("/api/machines", machinesRouter(db.models));
   const templateStore = deps.templates ?? builtInTemplates();
   const designs = createDesignService(db.models, deps.templateCatalogue ?? storeCatalogue(templateStore));
-  app.use("/api/designs", designsRouter(designs));
+  app.use("/api/designs", designsRouter(designs, createDesignExports(db.models, templateStore, deps.kernel)));
   app.use("/api/shared", sharedRouter(designs));
   app.use("/api/templates", templatesRouter(templatesService(templateStore)));
   app.use("/api/calculators", calculatorsRouter(calculatorsService()));

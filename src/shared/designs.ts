@@ -170,3 +170,33 @@ export const sharedDesignSchema = z.object({
 });
 export type SharedDesign = z.infer<typeof sharedDesignSchema>;
 export const sharedDesignResponseSchema = z.object({ design: sharedDesignSchema });
+
+/**
+ * The download formats of a saved design, the same as a template's (server/exporters/build-export.ts
+ * `EXPORT_FORMATS`; a unit test keeps the two lists equal).
+ */
+export const designExportFormats = ["pdf", "svg", "dxf", "step", "stl", "csv", "zip"] as const;
+
+/**
+ * `GET /api/designs/:id/export?format=…&units=…&projection=…&part=…&machine=…` → the file
+ * (Content-Disposition: attachment). `units` defaults to the design's, `projection` to first angle for mm
+ * and third angle for inches, `machine` (one of your machine profiles) puts its top spindle speed on the
+ * operation sheet.
+ */
+export const designExportQuerySchema = strictFields({
+  format: z.enum(designExportFormats, { error: `format must be one of ${designExportFormats.join(", ")}.` }),
+  units: unitPreferenceSchema.optional(),
+  projection: z.enum(["first", "third"], { error: 'projection must be "first" or "third".' }).optional(),
+  part: z
+    .string()
+    .max(60, { error: "part is a part id of at most 60 characters." })
+    .regex(/^[a-z][a-zA-Z0-9-]*$/, { error: "part must be a part id (or assembly)." })
+    .optional(),
+  machine: z.coerce
+    .number({ error: "machine must be the id of one of your machines." })
+    .int({ error: "machine must be the id of one of your machines." })
+    .positive({ error: "machine must be the id of one of your machines." })
+    .max(4_294_967_295, { error: "machine must be the id of one of your machines." })
+    .optional(),
+});
+export type DesignExportQuery = z.infer<typeof designExportQuerySchema>;

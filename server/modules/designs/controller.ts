@@ -1,5 +1,11 @@
 import type { Request, Response } from "express";
-import type { CreateDesignBody, DuplicateDesignBody, UpdateDesignBody } from "@/shared/designs";
+import type {
+  CreateDesignBody,
+  DesignExportQuery,
+  DuplicateDesignBody,
+  UpdateDesignBody,
+} from "@/shared/designs";
+import type { DesignExportService } from "./export-service";
 import type { DesignService } from "./service";
 
 function ownerOf(req: Request): number {
@@ -14,9 +20,38 @@ export function originOf(req: Request): string {
 
 const idOf = (req: Request) => Number(req.params.id);
 
+/** Today's date as printed in the title block (the engine reads no clock; the server does). */
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** Cancels the kernel work when the client goes away before the file is ready. */
+function abortOnClose(res: Response): AbortSignal {
+  const ctl = new AbortController();
+  res.on("close", () => {
+    if (!res.writableFinished) ctl.abort();
+  });
+  return ctl.signal;
+}
+
 /** The only designs code touching req/res. */
-export function designController(designs: DesignService) {
+export function designController(designs: DesignService, exports?: DesignExportService) {
   return {
+    async exportFile(req: Request, res: Response) {
+      if (!exports) throw new Error("export route mounted without an export service");
+      const query = res.locals.query as DesignExportQuery;
+      const file = await exports.export(ownerOf(req), idOf(req), {
+        ...query,
+        drawnBy: req.user?.displayName ?? "Jigwright user",
+        date: today(),
+        signal: abortOnClose(res),
+      });
+      res.status(200);
+      res.set("Content-Type", file.contentType);
+      res.set("Content-Length", String(file.body.length));
+      res.set("Content-Disposition", `attachment; filename="${file.fileName}"`);
+      res.set("Cache-Control", "private, no-store");
+      res.set("X-Content-Type-Options", "nosniff");
+      res.end(file.body);
+    },
     async list(req: Request, res: Response) {
       res.json({ designs: await designs.list(ownerOf(req), originOf(req)) });
     },

@@ -1,4 +1,8 @@
 import type { Models } from "@server/db/models";
+import type { KernelPool } from "@server/kernel";
+import { machineRepository } from "@server/modules/profiles/repository";
+import type { TemplateStore } from "@server/templates";
+import { designExportService, type DesignExportService } from "./export-service";
 import { designRepository, shareLinkRepository } from "./repository";
 import { designService, type DesignService } from "./service";
 import type { TemplateCatalogue } from "./template-catalogue";
@@ -14,6 +18,20 @@ export function createDesignService(
     shares: shareLinkRepository(models),
     catalogue,
     now,
+  });
+}
+
+/** Wires the downloads of saved designs over the compiled templates and the kernel (absent: 503). */
+export function createDesignExports(
+  models: Models,
+  templates: TemplateStore,
+  kernel?: KernelPool,
+): DesignExportService {
+  return designExportService({
+    designs: designRepository(models),
+    machines: machineRepository(models),
+    templates,
+    kernel,
   });
 }
 

@@ -1,6 +1,7 @@
 import { Router } from "express";
 import {
   createDesignBodySchema,
+  designExportQuerySchema,
   duplicateDesignBodySchema,
   shareTokenParamsSchema,
   updateDesignBodySchema,
@@ -9,6 +10,7 @@ import { recordIdParamsSchema } from "@/shared/profiles";
 import { requireUser } from "@server/middleware/auth";
 import { validate } from "@server/middleware/validate";
 import { designController } from "./controller";
+import type { DesignExportService } from "./export-service";
 import type { DesignService } from "./service";
 
 const idParams = validate({ params: recordIdParamsSchema });
@@ -17,8 +19,8 @@ const idParams = validate({ params: recordIdParamsSchema });
  * `/api/designs`: the signed-in user's saved designs and their share links (every role; guests 401).
  * Another user's design answers 404, exactly like a missing one.
  */
-export function designsRouter(designs: DesignService): Router {
-  const c = designController(designs);
+export function designsRouter(designs: DesignService, exports: DesignExportService): Router {
+  const c = designController(designs, exports);
   const r = Router();
   r.use(requireUser);
   r.get("/", c.list);
@@ -40,6 +42,11 @@ export function designsRouter(designs: DesignService): Router {
   r.post("/:id/restore", idParams, c.restore);
   r.post("/:id/share", idParams, c.share);
   r.delete("/:id/share", idParams, c.unshare);
+  r.get(
+    "/:id/export",
+    validate({ params: recordIdParamsSchema, query: designExportQuerySchema }),
+    c.exportFile,
+  );
   return r;
 }
 
