@@ -7,6 +7,7 @@ import { useDuplicateDesign } from "../api/duplicate-design";
 import { useUpdateDesign } from "../api/update-design";
 import { configuratorHref } from "../model/configurator-link";
 import { formatWhen } from "../model/present";
+import { DesignDownloads, type MachineChoice } from "./design-downloads";
 import { DetailsForm } from "./details-form";
 import { ParameterList } from "./parameter-list";
 import { SharePanel } from "./share-panel";
@@ -21,14 +22,17 @@ export function DesignCard({
   onDelete,
   deleting,
   onDuplicated,
+  machines,
 }: {
   design: Design;
   onDelete: (design: Design) => void;
   deleting: boolean;
   onDuplicated: (copy: Design) => void;
+  machines: readonly MachineChoice[];
 }) {
   const [editing, setEditing] = useState(false);
   const [sharing, setSharing] = useState(false);
+  const [downloading, setDownloading] = useState(false);
   const update = useUpdateDesign();
   const duplicate = useDuplicateDesign();
   const headingId = `design-${design.id}-name`;
@@ -121,6 +125,16 @@ export function DesignCard({
         >
           {duplicate.isPending ? "Duplicating…" : "Duplicate"}
         </Button>
+        {canOpen ? (
+          <Button
+            variant="secondary"
+            aria-expanded={downloading}
+            onClick={() => setDownloading((d) => !d)}
+            aria-label={`Download files of ${design.name}`}
+          >
+            Download…
+          </Button>
+        ) : null}
         <Button
           variant="secondary"
           aria-expanded={sharing}
@@ -138,6 +152,7 @@ export function DesignCard({
           {deleting ? "Deleting…" : "Delete"}
         </Button>
       </div>
+      {downloading ? <DesignDownloads design={design} machines={machines} /> : null}
       {sharing ? <SharePanel design={design} /> : null}
       {update.isError && !editing ? <Notice tone="fault">{update.error.message}</Notice> : null}
       {duplicate.isError ? <Notice tone="fault">{duplicate.error.message}</Notice> : null}

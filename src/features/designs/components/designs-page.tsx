@@ -8,6 +8,7 @@ import { useDeleteDesign } from "../api/delete-design";
 import { useDesigns } from "../api/get-designs";
 import { useRestoreDesign } from "../api/restore-design";
 import { DesignCard } from "./design-card";
+import type { MachineChoice } from "./design-downloads";
 
 type Status =
   | { kind: "deleted"; design: Design }
@@ -20,7 +21,13 @@ type Status =
  * "Saved designs": every design of the signed-in user, newest change first. Delete acts at once and
  * offers Undo (the server keeps a deleted design restorable for a day).
  */
-export function DesignsPage({ catalogueHref }: { catalogueHref: string }) {
+export function DesignsPage({
+  catalogueHref,
+  machines = [],
+}: {
+  catalogueHref: string;
+  machines?: readonly MachineChoice[];
+}) {
   const designs = useDesigns();
   const remove = useDeleteDesign();
   const restore = useRestoreDesign();
@@ -90,6 +97,7 @@ export function DesignsPage({ catalogueHref }: { catalogueHref: string }) {
                 onDelete={onDelete}
                 deleting={remove.isPending && remove.variables === d.id}
                 onDuplicated={(copy) => setStatus({ kind: "duplicated", design: copy })}
+                machines={machines}
               />
             </li>
           ))}
