@@ -49,22 +49,6 @@ function fillThreadData(feature: Record<string, unknown>, steps: Array<{ diamete
   }
 }
 
-function firstNonFinite(value: unknown, path: string): string | undefined {
-  if (typeof value === "number") return Number.isFinite(value) ? undefined : path || "(value)";
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) {
-      const hit = firstNonFinite(value[i], `${path}[${i}]`);
-      if (hit !== undefined) return hit;
-    }
-  } else if (value !== null && typeof value === "object") {
-    for (const [k, v] of Object.entries(value)) {
-      const hit = firstNonFinite(v, path ? `${path}.${k}` : k);
-      if (hit !== undefined) return hit;
-    }
-  }
-  return undefined;
-}
-
 /** Full schema validation of a part received from outside the engine (e.g. a saved design or a worker). */
 export function validateResolvedPart(value: unknown): { ok: true; part: ResolvedPart } | { ok: false; issues: string[] } {
   const parsed = resolvedVocabulary.part.safeParse(value);
@@ -93,15 +77,9 @@ export function resolveParts(compiled: readonly CompiledPart[], scope: Scope, op
     const steps = base && base.kind === "turned" && Array.isArray(base.steps) ? (base.steps as Array<{ diameter: number }>) : undefined;
     for (const f of features) fillThreadData(f, steps);
 
-    // The shape is guaranteed by construction (a schema-valid template, expressions type-checked as they
-    // resolve); only the numbers need a look: every one must be finite. Full validation lives in
-    // `validateResolvedPart` for callers that receive parts from elsewhere.
-    const bad = firstNonFinite(scaled, "");
-    if (bad !== undefined) {
-      issues.push({ partId: cp.id, code: "invalid", severity: "error", blocking: true, message: `Part "${cp.id}" ${bad}: not a finite number.` });
-      blocked.add(cp.id);
-      continue;
-    }
+    // Shape and finiteness are guaranteed by construction: the template passed its schema (literal numbers
+    // are finite), and every expression result is type-checked as it resolves and refused unless finite.
+    // `validateResolvedPart` does the full check for parts that come from anywhere else.
     const part = scaled as unknown as ResolvedPart;
     if (!options.materialKeys.includes(part.material)) {
       issues.push({ partId: part.id, code: "unknown-material", severity: "error", blocking: false, message: `${part.name}: "${part.material}" is not in the materials catalogue.` });
