@@ -25,7 +25,9 @@
  *  - On a turned part, ±z holes are axial (at any x, y inside the face); ±x / ±y holes are radial cross
  *    holes whose axis is the line through `at` parallel to `direction`; they enter at the outside diameter
  *    of the step they cross (the along-direction coordinate of `at` is not used) and `depth` is measured at
- *    the hole's axis from that surface. Radial holes carry no counterbore, countersink or chamfer.
+ *    the hole's axis from that surface; the hole is open to the outside across its whole width (an offset
+ *    cross hole reaches the curved surface everywhere). Radial holes carry no counterbore, countersink or
+ *    chamfer.
  *  - An internal thread is modelled as a plain hole of `boreDiameter` (the tap drill, filled in from the
  *    designation) to `drillDepth`; the thread itself is cosmetic. An external thread is cosmetic on its
  *    step (the step's diameter is the major diameter).
