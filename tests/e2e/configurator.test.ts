@@ -8,13 +8,53 @@
  * The vise sizes below are our own round numbers chosen so they convert to whole inches.
  */
 import fs from "node:fs";
+import type { Server } from "node:http";
+import type { AddressInfo } from "node:net";
+import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
+import { projectRoot } from "@server/config";
 import { seedDemo } from "@server/db/migrate";
 import { demoAccounts } from "@server/db/seeders/demo-accounts";
-import { launchBrowser, startApp, type E2eApp, type E2eBrowser } from "./harness";
+import { createKernelPool, type KernelPool } from "@server/kernel";
+import { createTestApp, type TestApp } from "../api/helpers/app";
+import { launchBrowser, type E2eBrowser } from "./harness";
 
-let app: E2eApp;
+/**
+ * The harness's app has no solid kernel; the preview and the drawing need one, so this test starts the
+ * same test app (createTestApp, the harness's own base) with a one-worker kernel pool, serving the built
+ * client as in production.
+ */
+interface KernelApp {
+  baseUrl: string;
+  app: TestApp;
+  close(): Promise<void>;
+}
+
+async function startAppWithKernel(): Promise<KernelApp> {
+  if (!fs.existsSync(path.join(projectRoot, "dist", "client", "index.html"))) {
+    const { build } = await import("vite");
+    await build({ root: projectRoot, logLevel: "warn" });
+  }
+  const kernel: KernelPool = createKernelPool({ poolSize: 1, warmupRounds: 1, taskTimeoutMs: 120_000 });
+  const app = await createTestApp({ config: { env: "production", serveClient: true }, deps: { kernel } });
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = app.app.listen(0, "127.0.0.1", () => resolve(s));
+    s.once("error", reject);
+  });
+  return {
+    baseUrl: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
+    app,
+    async close() {
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await app.close();
+      await kernel.close();
+    },
+  };
+}
+
+let app: KernelApp;
 let browser: E2eBrowser;
 const machinist = demoAccounts.find((a) => a.role === "machinist")!;
 
@@ -24,13 +64,13 @@ const vise = {
   name: `Mill vise E2E ${Date.now().toString(36)}`,
   jawWidthMm: "127",
   jawHeightMm: "38.1",
-  jawThicknessMm: "22",
+  jawThicknessMm: "26.5",
   maxOpeningMm: "150",
 };
 
 beforeAll(async () => {
-  app = await startApp();
-  await seedDemo(app.db);
+  app = await startAppWithKernel();
+  await seedDemo(app.app.db);
   browser = await launchBrowser({ width: 1280, height: 900 });
 });
 
@@ -77,14 +117,21 @@ describe("configurator in the browser, signed in as the demo machinist", () => {
     await page.getByLabel("Maximum opening (mm) of new vise").press("Enter");
     await page.getByText(`Added “${vise.name}”.`).waitFor();
 
-    // The catalogue: a card per template with a picture drawn from its model.
+    // The catalogue: a card per template; search by words narrows it to the vise stop, whose picture is
+    // drawn from its own model.
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Templates" }).click();
     await page.waitForURL("**/templates");
+    await page.getByRole("list", { name: "Templates" }).waitFor();
+    expect(await page.getByRole("list", { name: "Templates" }).getByRole("listitem").count()).toBeGreaterThan(
+      1,
+    );
+    await page.getByLabel("Search templates").fill("vise stop");
+    await page.waitForURL(/q=vise/);
     const card = page
       .getByRole("listitem")
       .filter({ has: page.getByRole("link", { name: "Cam-lock vise stop" }) });
-    await card.getByRole("img", { name: /drawn from its model/ }).waitFor({ timeout: 60_000 });
-    await screenshot("catalogue");
+    await card.getByRole("img", { name: /drawn from its model/ }).waitFor({ timeout: 150_000 });
+    await screenshot("catalogue-search");
     await card.getByRole("link", { name: "Cam-lock vise stop" }).click();
     await page.waitForURL("**/templates/cam-vise-stop**");
     await page.getByRole("heading", { level: 1, name: "Cam-lock vise stop" }).waitFor();
@@ -98,10 +145,10 @@ describe("configurator in the browser, signed in as the demo machinist", () => {
     await page.getByText(`from “${vise.name}”`).waitFor();
     expect(await field(page, "Jaw width").inputValue()).toBe("127");
     expect(await field(page, "Jaw height").inputValue()).toBe("38.1");
-    expect(await field(page, "Jaw thickness").inputValue()).toBe("22");
+    expect(await field(page, "Jaw thickness").inputValue()).toBe("26.5");
     // The address follows, so the configuration can be bookmarked.
     await page.waitForURL(/jawWidth=127/);
-    await page.waitForURL(/jawThickness=22/);
+    await page.waitForURL(/jawThickness=26.5/);
 
     // Checks for exactly these values, and the 3D preview.
     await page
@@ -110,7 +157,7 @@ describe("configurator in the browser, signed in as the demo machinist", () => {
     expect(await page.getByTestId("checks-summary").textContent()).toMatch(/checks pass|to look at/);
     await page.getByRole("heading", { name: "Engineering figures" }).waitFor();
     expect(await page.getByRole("heading", { name: "Parts", exact: true }).count()).toBe(1);
-    await page.getByTestId("model-canvas").locator("canvas").waitFor({ timeout: 60_000 });
+    await page.getByTestId("model-canvas").locator("canvas").waitFor({ timeout: 150_000 });
     await page.getByRole("button", { name: "Exploded" }).click();
     expect(await page.getByRole("button", { name: "Exploded" }).getAttribute("aria-pressed")).toBe("true");
     await page.getByRole("button", { name: "Exploded" }).click();
@@ -133,15 +180,22 @@ describe("configurator in the browser, signed in as the demo machinist", () => {
     // ISO 32000-1 §7.5.2: a PDF file begins with the header "%PDF-".
     expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
     const text = await textOfPdf(file);
-    // ISO 7200 title block fields and the template's name.
+    // The title block (ISO 7200 fields: title, drawing number, revision, scale, sheet, drawn by, date) and
+    // the general tolerance (ISO 2768-1) on the template's own drawing, drawn by the signed-in machinist.
     expect(text).toContain("Cam-lock vise stop");
-    expect(text).toMatch(/ISO 2768/);
-    expect(text).toMatch(/scale|Scale|SCALE/);
-    // The jaw thickness entered (22 mm) is what the body is made to fit.
-    expect(text).toMatch(/\b22\b/);
+    for (const fieldName of ["Title", "Drawing number", "Revision", "Scale", "Sheet", "Drawn by", "Date"]) {
+      expect(text, `title block field "${fieldName}"`).toContain(fieldName);
+    }
+    expect(text).toContain(machinist.displayName);
+    expect(text).toMatch(/ISO 2768-m/);
     await page.getByText(/downloaded/).waitFor();
     await screenshot("configurator-downloaded");
-  });
+    // The jaw size entered must be on the drawing, so the print says which vise it was made for. 26.5 mm
+    // was chosen because no dimension, mass or speed of the default drawing reads 26.5.
+    expect(text, "the drawing should state the jaw thickness (26.5 mm) it was sized for").toMatch(
+      /(?<![\d.])26\.5(?!\d)/,
+    );
+  }, 420_000);
 
   it("switches to inches and converts a known length exactly, in place", async () => {
     const { page, screenshot } = browser;

@@ -3,6 +3,10 @@ import type { ParameterValue } from "@/engine/parameters";
 import type { LengthUnit } from "@/engine/units";
 import { api } from "@/lib/api-client";
 import { decodeModel, modelResponseSchema, type PreviewModel } from "./model-schema";
+import { createSerialQueue } from "./one-at-a-time";
+
+/** Catalogue pictures ask for their models one at a time (the kernel is the busiest part of a small server). */
+const pictureQueue = createSerialQueue();
 
 export const modelKeys = {
   all: ["templates", "model"] as const,
@@ -27,9 +31,11 @@ export async function getModel(
 
 /** `GET /api/templates/:id/model`: the template at its defaults (catalogue pictures). */
 export async function getDefaultModel(id: string, signal?: AbortSignal): Promise<PreviewModel> {
-  return decodeModel(
-    await api.get(`/api/templates/${encodeURIComponent(id)}/model`, { schema: modelResponseSchema, signal }),
+  const data = await pictureQueue(
+    () => api.get(`/api/templates/${encodeURIComponent(id)}/model`, { schema: modelResponseSchema, signal }),
+    signal,
   );
+  return decodeModel(data);
 }
 
 export const defaultModelQueryOptions = (id: string) =>
