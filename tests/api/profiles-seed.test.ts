@@ -1,5 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { designListResponseSchema } from "@/shared/designs";
 import { machineListResponseSchema, viseListResponseSchema } from "@/shared/profiles";
+import { evaluateTemplate } from "@/engine";
+import { builtInTemplates } from "@server/templates";
+import { demoDesignName } from "@server/db/seeders/0011-demo-workshop-design";
 import { seedDemo } from "@server/db/migrate";
 import { demoAccounts } from "@server/db/seeders/demo-accounts";
 import {
@@ -48,5 +52,28 @@ describe("demo workshop profiles", () => {
     const agent = new TestAgent(t.app);
     await agent.login(designer.email, designer.password);
     expect(viseListResponseSchema.parse((await agent.get("/api/vises")).body).vises).toEqual([]);
+  });
+
+  it("give the demo machinist one saved design, pinned to the catalogue's version, that evaluates and builds", async () => {
+    const agent = new TestAgent(t.app);
+    await agent.login(machinist.email, machinist.password);
+    const designs = designListResponseSchema.parse((await agent.get("/api/designs")).body).designs;
+    const compiled = builtInTemplates().get("cam-vise-stop")!;
+    expect(designs.map((d) => d.name)).toEqual([demoDesignName]);
+    const [d] = designs;
+    expect(d).toMatchObject({
+      templateId: "cam-vise-stop",
+      templateVersion: compiled.template.version,
+      newerVersion: null,
+    });
+    // Sized from the 100 mm vise profile; the values are inside the template's limits and make buildable parts.
+    expect(d!.parameters).toEqual({
+      jawWidth: demoVises[0]!.jawWidthMm,
+      jawHeight: demoVises[0]!.jawHeightMm,
+      jawThickness: demoVises[0]!.jawThicknessMm,
+    });
+    const evaluation = evaluateTemplate(compiled, { parameters: d!.parameters });
+    expect(evaluation.buildable).toBe(true);
+    expect(evaluation.checks.filter((c) => c.severity === "error" && !c.passed)).toEqual([]);
   });
 });
