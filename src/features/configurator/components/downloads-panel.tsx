@@ -116,8 +116,17 @@ export function DownloadsPanel({
       </h2>
       {failingErrors.length > 0 ? (
         <Notice tone="caution" className="mt-2" title={`The drawing will be stamped “NOT CHECKED — ERRORS”`}>
-          {failingErrors.length === 1 ? "One error check fails" : `${failingErrors.length} error checks fail`}
-          : {failingErrors.join(" ")} You can still download it, but fix the errors before making the part.
+          <p>
+            {failingErrors.length === 1
+              ? "One error check fails:"
+              : `${failingErrors.length} error checks fail:`}
+          </p>
+          <ul className="mt-1 list-disc space-y-1 pl-5">
+            {failingErrors.map((m) => (
+              <li key={m}>{m}</li>
+            ))}
+          </ul>
+          <p className="mt-1">You can still download it, but fix the errors before making the part.</p>
         </Notice>
       ) : null}
       <div className="mt-3 flex flex-wrap items-center gap-3">
