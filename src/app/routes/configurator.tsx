@@ -2,6 +2,7 @@ import { useParams } from "react-router";
 import { useMe } from "@/features/auth/api/get-me";
 import { templatesPath } from "@/features/catalogue/paths";
 import { ConfiguratorPage } from "@/features/configurator/components/configurator-page";
+import { workshopPath } from "@/features/profiles/paths";
 import { LazyModelViewer } from "@/features/viewer/components/lazy-model-viewer";
 import { paths } from "@/lib/paths";
 
@@ -13,9 +14,9 @@ export function Component() {
     <ConfiguratorPage
       key={id}
       templateId={id}
-      signedIn={Boolean(me.data)}
+      signedIn={me.data ? true : me.isPending ? null : false}
       renderViewer={(props) => <LazyModelViewer {...props} />}
-      links={{ catalogue: templatesPath, signIn: paths.signIn, vises: "/workshop" }}
+      links={{ catalogue: templatesPath, signIn: paths.signIn, vises: workshopPath }}
     />
   );
 }

@@ -30,7 +30,8 @@ export interface ViewerSlotProps {
 
 export interface ConfiguratorPageProps {
   templateId: string;
-  signedIn: boolean;
+  /** Null while the sign-in is still being checked (nothing account-related is shown yet). */
+  signedIn: boolean | null;
   renderViewer: (props: ViewerSlotProps) => ReactNode;
   links: { catalogue: string; signIn: string; vises: string };
 }
@@ -146,7 +147,7 @@ function Configurator({
               onFill={config.fillFromMm}
               visesHref={links.vises}
             />
-          ) : (
+          ) : signedIn === null ? null : (
             <p className="rounded-lg border border-steel-200 bg-white p-3 text-sm text-steel-700">
               <Link to={signInHref} className="font-semibold text-spark-700 underline">
                 Sign in
@@ -195,14 +196,16 @@ function Configurator({
                 units={units}
               />
             ) : null}
-            <DownloadsPanel
-              templateId={template.id}
-              parameters={config.userParameters}
-              units={units}
-              signedIn={signedIn}
-              failingErrors={failingErrors}
-              signInHref={signInHref}
-            />
+            {signedIn === null ? null : (
+              <DownloadsPanel
+                templateId={template.id}
+                parameters={config.userParameters}
+                units={units}
+                signedIn={signedIn}
+                failingErrors={failingErrors}
+                signInHref={signInHref}
+              />
+            )}
           </div>
         </div>
       </div>
