@@ -1,8 +1,10 @@
 import { z } from "zod";
+import { decodeFloat32, decodeUint32 } from "@/shared/model";
 
 /**
- * The 3D preview data of `GET/POST /api/templates/:id/model`, read leniently: typed arrays may arrive as
- * plain number lists or as base64 of little-endian Float32 / Uint32 data. Matrices are 4 × 4 column-major
+ * The 3D preview data of `GET/POST /api/templates/:id/model` (contract: src/shared/model.ts), read
+ * leniently so the preview keeps working if fields are added: typed arrays may arrive as plain number lists
+ * or as base64 of little-endian Float32 / Uint32 data (decoded with the contract's own decoders). Matrices are 4 × 4 column-major
  * (three.js `Matrix4.fromArray`), lengths in millimetres, assembly coordinates.
  */
 const numbers = z.union([z.array(z.number()), z.string()]);
@@ -65,17 +67,8 @@ export interface PreviewModel {
 
 const IDENTITY = [1, 0, 0, 0, 0, 1, 0, 0, 0, 0, 1, 0, 0, 0, 0, 1];
 
-function bytesOf(base64: string): ArrayBuffer {
-  const binary = atob(base64);
-  const bytes = new Uint8Array(binary.length);
-  for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
-  return bytes.buffer;
-}
-
-const floats = (v: number[] | string) =>
-  typeof v === "string" ? new Float32Array(bytesOf(v)) : Float32Array.from(v);
-const uints = (v: number[] | string) =>
-  typeof v === "string" ? new Uint32Array(bytesOf(v)) : Uint32Array.from(v);
+const floats = (v: number[] | string) => (typeof v === "string" ? decodeFloat32(v) : Float32Array.from(v));
+const uints = (v: number[] | string) => (typeof v === "string" ? decodeUint32(v) : Uint32Array.from(v));
 
 /** Steel-grey for a part whose colour the server did not give. */
 const fallbackColour = "#9aa5ae";
