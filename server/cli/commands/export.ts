@@ -83,7 +83,9 @@ export const exportCommand: CliCommand = {
       if (err instanceof ParameterResolutionError) throw new CliUsageError(err.message);
       throw err;
     }
-    const kernel = createInProcessKernel();
+    // The kernel (a few seconds to load) only when the format needs solids or views: not for the CSV.
+    let pool: ReturnType<typeof createInProcessKernel> | undefined;
+    const kernel = { run: <T>(task: string, input: unknown) => (pool ??= createInProcessKernel()).run<T>(task, input) };
     try {
       const file = await buildExport(
         { template, evaluation, format, units, projection, part: single(parsed, "part"), drawnBy: os.userInfo().username || "Jigwright", date: today() },
@@ -97,7 +99,7 @@ export const exportCommand: CliCommand = {
       if (err instanceof KernelError && (err.code === "kernel_input" || err.code === "kernel_invalid" || err.code === "kernel_build")) throw new CliUsageError(err.message);
       throw err;
     } finally {
-      await kernel.close();
+      await pool?.close();
     }
     if (!evaluation.ok) {
       const failing = evaluation.checks.filter((c) => c.severity === "error" && !c.passed);

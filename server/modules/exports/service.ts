@@ -67,7 +67,9 @@ export function exportService(deps: ExportServiceDeps) {
     async exportTemplate(id: string, req: TemplateExportRequest): Promise<ExportFile> {
       const compiled = find(id);
       const evaluation = evaluate(compiled, req);
-      if (!deps.kernel) throw new HttpError("service_unavailable", "The solid modeller is not running on this server.");
+      // The cut list needs no solid; everything else is drawn from the kernel's projections or solids.
+      if (!deps.kernel && req.format !== "csv") throw new HttpError("service_unavailable", "The solid modeller is not running on this server.");
+      const kernel = deps.kernel ?? { run: () => Promise.reject(new HttpError("service_unavailable", "The solid modeller is not running on this server.")) };
       const units = req.units ?? compiled.template.units;
       try {
         return await buildExport(
@@ -81,7 +83,7 @@ export function exportService(deps: ExportServiceDeps) {
             drawnBy: req.drawnBy,
             date: req.date,
           },
-          { kernel: deps.kernel, ...(req.signal ? { signal: req.signal } : {}) },
+          { kernel, ...(req.signal ? { signal: req.signal } : {}) },
         );
       } catch (err) {
         if (err instanceof ExportInputError) throw badRequest(err.message, [{ path: err.field, message: err.message }]);
