@@ -1,6 +1,6 @@
 import type { Shape3D } from "replicad";
 import type { PatternableFeature, ResolvedFeature, ResolvedPart } from "@/engine/parts/features";
-import { cutMany, unifyFaces } from "./boolean";
+import { cutMany, firstSolid, unifyFaces } from "./boolean";
 import { featureBuilders } from "./builders";
 import type { BaseInfo, BuildContext, CosmeticThread, ToolResult } from "./builders/types";
 import { describeFeature, formatParameters, KernelError } from "./errors";
@@ -148,12 +148,14 @@ function buildFast(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo): Bu
     shape.delete();
     throw new KernelError("kernel_invalid", check.problem ?? "not a valid solid");
   }
-  const solids = shape.solids;
   let result: Shape3D = shape;
-  if (solids.length === 1 && shape.constructor !== solids[0]!.constructor) {
-    result = solids[0]!;
-    shape.delete();
-  } else solids.forEach((s) => s.delete());
+  if (!(shape instanceof kernel.r.Solid)) {
+    const solid = firstSolid(kernel, shape);
+    if (solid) {
+      result = solid;
+      shape.delete();
+    }
+  }
   return { partId: part.id, shape: result, threads, volumeMm3: check.volumeMm3, bbox: boundsOf(result) };
 }
 

@@ -1,4 +1,5 @@
 import type { Shape3D } from "replicad";
+import { countSolids } from "./boolean";
 import type { LoadedKernel } from "./oc";
 
 export interface ShapeCheck {
@@ -34,9 +35,7 @@ export function boundsOf(shape: Shape3D): { min: [number, number, number]; max: 
  */
 export function checkShape(kernel: LoadedKernel, shape: Shape3D): ShapeCheck {
   const { oc } = kernel;
-  const solids = shape.solids;
-  const solidCount = solids.length;
-  solids.forEach((s) => s.delete());
+  const solidCount = countSolids(kernel, shape);
   const analyzer = new oc.BRepCheck_Analyzer(shape.wrapped, true, false);
   const topoValid = analyzer.IsValid() as boolean;
   analyzer.delete();

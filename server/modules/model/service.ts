@@ -47,8 +47,11 @@ export function modelService(deps: ModelServiceDeps) {
     return compiled;
   };
 
-  /** Evaluates and guards; throws 404/400 HttpErrors. Shared with the download routes. */
-  function prepare(id: string, body: EvaluateRequest): PreparedModel {
+  /**
+   * Evaluates and guards; throws 404/400 HttpErrors. Shared with the download routes. With
+   * `kernelGuard: false` the kernel's own pre-check is left to the caller (done before building).
+   */
+  function prepare(id: string, body: EvaluateRequest, { kernelGuard = true } = {}): PreparedModel {
     const compiled = find(id);
     let evaluation: Evaluation;
     try {
@@ -66,18 +69,23 @@ export function modelService(deps: ModelServiceDeps) {
         issues.map((i) => ({ path: `parts.${i.partId}${i.featureIndex !== undefined ? `.features.${i.featureIndex}` : ""}`, message: i.message })),
       );
     }
-    // The kernel's own guard, on this thread: a degenerate part never reaches a worker.
-    try {
-      for (const part of evaluation.parts) validatePartForKernel(part);
-    } catch (err) {
-      throw kernelErrorToHttp(err);
-    }
+    if (kernelGuard) guard(evaluation.parts);
     const t = compiled.template;
     return { compiled, evaluation, parts: evaluation.parts, cacheKey: modelCacheKey(t.id, t.version, evaluation.parametersMm) };
   }
 
+  /** The kernel's own guard, on this thread: a degenerate part never reaches a worker. */
+  function guard(parts: ResolvedPart[]): void {
+    try {
+      for (const part of parts) validatePartForKernel(part);
+    } catch (err) {
+      throw kernelErrorToHttp(err);
+    }
+  }
+
   async function build(prepared: PreparedModel): Promise<string> {
     if (!deps.kernel) throw new HttpError("service_unavailable", "The solid modeller is not running on this server.");
+    guard(prepared.parts);
     let out: ModelTaskOutput;
     try {
       out = await deps.kernel.run<ModelTaskOutput>("model", { parts: prepared.parts });
@@ -135,7 +143,8 @@ export function modelService(deps: ModelServiceDeps) {
      * share one kernel job (so a job is not cancelled when one of its callers goes away).
      */
     async modelJson(id: string, body: EvaluateRequest): Promise<{ json: string; cacheKey: string; cached: boolean }> {
-      const prepared = prepare(id, body);
+      // A cached answer was guarded when it was built: skip the kernel guard until a miss.
+      const prepared = prepare(id, body, { kernelGuard: false });
       const units = body.units ?? prepared.compiled.template.units;
       const withUnits = (rest: string) => `{"units":${JSON.stringify(units)},${rest.slice(1)}`;
       const hit = cache.get(prepared.cacheKey);
