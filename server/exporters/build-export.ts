@@ -10,6 +10,7 @@
 import JSZip from "jszip";
 import { Readable } from "node:stream";
 import { buildAssemblySheet } from "@/engine/drawing/assemblySheet";
+import { madeToSuitNote } from "@/engine/drawing/madeToSuit";
 import { engineFits, engineThreads } from "@/engine/drawing/lookups";
 import type { DrawingSheet, SheetSizeName } from "@/engine/drawing/model";
 import { buildPartModelSpace, buildPartSheet, type PartSheetInput, type SheetCommon } from "@/engine/drawing/partSheet";
@@ -42,7 +43,7 @@ export class ExportInputError extends Error {
 }
 
 export interface ExportRequest {
-  template: Pick<Template, "id" | "version" | "name" | "drawing">;
+  template: Pick<Template, "id" | "version" | "name" | "drawing" | "parameters" | "assembly">;
   evaluation: Evaluation;
   format: ExportFormat;
   units: "mm" | "in";
@@ -66,6 +67,21 @@ export interface ExportFile {
 export interface ExportDeps {
   kernel: Pick<KernelPool, "run">;
   signal?: AbortSignal;
+  /**
+   * Build the whole file inside a kernel worker (the "export" task), so laying out the sheets and writing
+   * the PDF never holds up the web server's event loop. Default true; the task itself runs with false.
+   * Input mistakes (unknown part, missing part) are found on the caller's thread first.
+   */
+  inWorker?: boolean;
+  /** Time limit of the worker job, ms (a whole pack is several kernel jobs in one; default 120 s). */
+  timeoutMs?: number;
+}
+
+/** What the "export" kernel task returns. */
+export interface ExportTaskOutput {
+  fileName: string;
+  contentType: string;
+  bytes: Uint8Array;
 }
 
 const CONTENT_TYPES: Record<ExportFormat, string> = {
@@ -190,12 +206,25 @@ async function drawingSheets(pack: Pack, deps: ExportDeps, only?: ResolvedPart):
 function assemblySheet(pack: Pack, projected: ProjectedAssembly, n: number, total: number): DrawingSheet {
   const materialNames = Object.fromEntries(pack.parts.map((p) => [p.id, materialInfo(p.material)?.name ?? p.material]));
   const mass = pack.req.evaluation.partSummaries.reduce((s, p) => (p.massKg == null ? s : s + p.massKg * p.quantity), 0);
-  return buildAssemblySheet({ ...pack.common, parts: pack.parts, projected, materialNames, totalMassKg: mass, sheetNumber: n, sheetCount: total });
+  const { template, evaluation, units } = pack.req;
+  const madeToSuit = madeToSuitNote(template.parameters, evaluation.parameters, units);
+  const extraNotes = [...(madeToSuit ? [madeToSuit] : []), ...(template.assembly?.notes ?? [])];
+  return buildAssemblySheet({ ...pack.common, parts: pack.parts, projected, materialNames, totalMassKg: mass, sheetNumber: n, sheetCount: total, extraNotes });
 }
 
 async function partDxf(pack: Pack, deps: ExportDeps, part: ResolvedPart): Promise<string> {
   const projected = await project(pack, deps, [part], false);
   return shapesToDxf(buildPartModelSpace(partInput(pack, part, projected.parts[0]!, 1, 1)), pack.req.units);
+}
+
+/** Refuses, before any work, a format that needs one part when none (or "assembly") was chosen. */
+function checkChoices(pack: Pack): void {
+  const { format, part } = pack.req;
+  if (format === "dxf") requirePart(pack, format);
+  if (format === "stl" && part !== "assembly") requirePart(pack, format);
+  if (format === "svg" && !part && pack.parts.length > 1) {
+    throw new ExportInputError(`An SVG holds one sheet: choose a part (${pack.parts.map((p) => p.id).join(", ")}) or "assembly".`, "part");
+  }
 }
 
 function requirePart(pack: Pack, format: string): ResolvedPart {
@@ -226,6 +255,11 @@ function pdfMeta(pack: Pack, what: string) {
 /** Builds one export file. Throws ExportInputError for bad choices and KernelError for solid failures. */
 export async function buildExport(req: ExportRequest, deps: ExportDeps): Promise<ExportFile> {
   const pack = packFor(req);
+  checkChoices(pack);
+  if (deps.inWorker ?? true) {
+    const out = await deps.kernel.run<ExportTaskOutput>("export", req, { timeoutMs: deps.timeoutMs ?? 120_000, ...(deps.signal ? { signal: deps.signal } : {}) });
+    return { fileName: out.fileName, contentType: out.contentType, body: Buffer.from(out.bytes.buffer, out.bytes.byteOffset, out.bytes.byteLength) };
+  }
   const { id, version } = req.template;
   const file = (what: string, ext: string, body: Buffer | string): ExportFile => ({
     fileName: exportFileName(id, version, what, ext),

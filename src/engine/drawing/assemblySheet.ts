@@ -24,6 +24,8 @@ export interface AssemblySheetInput extends SheetCommon {
   /** Display name of each part's material, by part id. */
   materialNames: Record<string, string>;
   totalMassKg?: number;
+  /** Notes of the template's own (what the design was made to suit, assembly instructions). */
+  extraNotes?: string[];
 }
 
 const BALLOON_RADIUS_MM = 4.5;
@@ -126,6 +128,7 @@ export function buildAssemblySheet(input: AssemblySheetInput): DrawingSheet {
   const notes = [
     `Dimensions in ${input.units === "mm" ? "mm" : "inches"}. Assembly for reference: make each part from its own drawing.`,
     `General tolerances ISO 2768-${input.generalTolerance} on the part drawings.`,
+    ...(input.extraNotes ?? []),
     "Check the assembly moves freely and clamps before it is used on the machine; follow the machine maker's guidance.",
     ...(stamped ? [`Template checks failing: ${input.failingChecks.join("; ")}.`] : []),
   ];
