@@ -67,21 +67,6 @@ export interface ExportFile {
 export interface ExportDeps {
   kernel: Pick<KernelPool, "run">;
   signal?: AbortSignal;
-  /**
-   * Build the whole file inside a kernel worker (the "export" task), so laying out the sheets and writing
-   * the PDF never holds up the web server's event loop. Default true; the task itself runs with false.
-   * Input mistakes (unknown part, missing part) are found on the caller's thread first.
-   */
-  inWorker?: boolean;
-  /** Time limit of the worker job, ms (a whole pack is several kernel jobs in one; default 120 s). */
-  timeoutMs?: number;
-}
-
-/** What the "export" kernel task returns. */
-export interface ExportTaskOutput {
-  fileName: string;
-  contentType: string;
-  bytes: Uint8Array;
 }
 
 const CONTENT_TYPES: Record<ExportFormat, string> = {
@@ -217,16 +202,6 @@ async function partDxf(pack: Pack, deps: ExportDeps, part: ResolvedPart): Promis
   return shapesToDxf(buildPartModelSpace(partInput(pack, part, projected.parts[0]!, 1, 1)), pack.req.units);
 }
 
-/** Refuses, before any work, a format that needs one part when none (or "assembly") was chosen. */
-function checkChoices(pack: Pack): void {
-  const { format, part } = pack.req;
-  if (format === "dxf") requirePart(pack, format);
-  if (format === "stl" && part !== "assembly") requirePart(pack, format);
-  if (format === "svg" && !part && pack.parts.length > 1) {
-    throw new ExportInputError(`An SVG holds one sheet: choose a part (${pack.parts.map((p) => p.id).join(", ")}) or "assembly".`, "part");
-  }
-}
-
 function requirePart(pack: Pack, format: string): ResolvedPart {
   const id = pack.req.part;
   if (!id || id === "assembly") {
@@ -255,11 +230,6 @@ function pdfMeta(pack: Pack, what: string) {
 /** Builds one export file. Throws ExportInputError for bad choices and KernelError for solid failures. */
 export async function buildExport(req: ExportRequest, deps: ExportDeps): Promise<ExportFile> {
   const pack = packFor(req);
-  checkChoices(pack);
-  if (deps.inWorker ?? true) {
-    const out = await deps.kernel.run<ExportTaskOutput>("export", req, { timeoutMs: deps.timeoutMs ?? 120_000, ...(deps.signal ? { signal: deps.signal } : {}) });
-    return { fileName: out.fileName, contentType: out.contentType, body: Buffer.from(out.bytes.buffer, out.bytes.byteOffset, out.bytes.byteLength) };
-  }
   const { id, version } = req.template;
   const file = (what: string, ext: string, body: Buffer | string): ExportFile => ({
     fileName: exportFileName(id, version, what, ext),
