@@ -37,6 +37,33 @@ export interface PreparedModel {
 
 const b64 = (a: Float32Array | Uint32Array) => Buffer.from(a.buffer, a.byteOffset, a.byteLength).toString("base64");
 
+/** Rough relative cost of building and meshing a part: its features, patterns counted per copy. */
+function partCost(part: ResolvedPart): number {
+  return part.features.reduce((s, f) => s + (f.kind === "pattern-linear" || f.kind === "pattern-circular" ? Math.max(1, f.count) : 1), 1);
+}
+
+/**
+ * Builds the parts on as many workers as the pool has, in balanced groups (largest first onto the
+ * lightest group), so one request uses every core; answers come back in the parts' order.
+ */
+async function buildSpread(kernel: KernelPool, parts: ResolvedPart[]): Promise<ModelTaskOutput> {
+  const groups = Math.max(1, Math.min(kernel.stats().size, parts.length));
+  if (groups === 1) return kernel.run<ModelTaskOutput>("model", { parts });
+  const bins = Array.from({ length: groups }, () => ({ cost: 0, indices: [] as number[] }));
+  parts
+    .map((p, i) => ({ i, cost: partCost(p) }))
+    .sort((a, b) => b.cost - a.cost)
+    .forEach(({ i, cost }) => {
+      const bin = bins.reduce((lo, b) => (b.cost < lo.cost ? b : lo));
+      bin.cost += cost;
+      bin.indices.push(i);
+    });
+  const results = await Promise.all(bins.map((b) => kernel.run<ModelTaskOutput>("model", { parts: b.indices.map((i) => parts[i]!) })));
+  const out: ModelTaskOutput["parts"] = new Array(parts.length);
+  bins.forEach((b, k) => b.indices.forEach((i, j) => (out[i] = results[k]!.parts[j]!)));
+  return { parts: out };
+}
+
 export function modelService(deps: ModelServiceDeps) {
   const cache = createResultCache<string>(deps.cacheMb ?? 64);
   const inflight = new Map<string, Promise<string>>();
@@ -88,7 +115,7 @@ export function modelService(deps: ModelServiceDeps) {
     guard(prepared.parts);
     let out: ModelTaskOutput;
     try {
-      out = await deps.kernel.run<ModelTaskOutput>("model", { parts: prepared.parts });
+      out = await buildSpread(deps.kernel, prepared.parts);
     } catch (err) {
       throw kernelErrorToHttp(err);
     }
