@@ -10,7 +10,7 @@
  */
 import http from "node:http";
 import type { AddressInfo } from "node:net";
-import { monitorEventLoopDelay } from "node:perf_hooks";
+import { monitorEventLoopDelay, performance as nodePerformance } from "node:perf_hooks";
 import express from "express";
 import type { CompiledTemplate } from "@/engine";
 import { createInProcessKernel, createKernelPool, kernelConfigFromEnv } from "@server/kernel";
@@ -104,7 +104,7 @@ export const kernelBench: BenchModule = {
         }
       })();
       loop.enable();
-      const elu0 = performance.eventLoopUtilization();
+      const elu0 = nodePerformance.eventLoopUtilization();
       const s = performance.now();
       const jobs = variants(stop, 4, 7).map((parameters) => {
         const q = new URLSearchParams(Object.entries(parameters).map(([k, v]) => [k, String(v)]));
@@ -115,7 +115,7 @@ export const kernelBench: BenchModule = {
       });
       const bodies = await Promise.all(jobs);
       const wall = performance.now() - s;
-      const elu = performance.eventLoopUtilization(elu0);
+      const elu = nodePerformance.eventLoopUtilization(elu0);
       loop.disable();
       running = false;
       await pinger;
