@@ -1,6 +1,7 @@
 import { infoTask } from "./info";
 import { modelTask } from "./model";
 import { projectTask } from "./project";
+import { exportTask } from "./export";
 import { stepTask } from "./step";
 import { stlTask } from "./stl";
 import type { KernelTask } from "./types";
@@ -9,7 +10,7 @@ import type { KernelTask } from "./types";
  * The task registry: every kind of work a kernel worker can do. To add a task, write
  * `tasks/<name>.ts` exporting `defineTask({ name, run(input, ctx) })` and add it to this list (one line).
  */
-export const kernelTasks: KernelTask<never, unknown>[] = [modelTask, stepTask, stlTask, infoTask, projectTask];
+export const kernelTasks: KernelTask<never, unknown>[] = [modelTask, stepTask, stlTask, infoTask, projectTask, exportTask];
 
 export type { ModelTaskInput, ModelTaskOutput, ModelTaskPart } from "./model";
 export type { StepTaskInput, StepTaskOutput } from "./step";
