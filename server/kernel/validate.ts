@@ -159,9 +159,13 @@ function featureProblems(f: ResolvedFeature, index: number, base: BaseInfo): Pro
   }
 }
 
-/** Throws a `kernel_input` KernelError naming the part and the first feature with a problem. */
-export function validatePartForKernel(part: ResolvedPart): BaseInfo {
-  const parsed = resolvedVocabulary.part.safeParse(part);
+/**
+ * Throws a `kernel_input` KernelError naming the part and the first feature with a problem.
+ * `schema: false` skips the structural (zod) check, for parts fresh from the engine's evaluator on the web
+ * thread; the worker always runs the full check before its first kernel call.
+ */
+export function validatePartForKernel(part: ResolvedPart, { schema = true }: { schema?: boolean } = {}): BaseInfo {
+  const parsed = schema ? resolvedVocabulary.part.safeParse(part) : ({ success: true } as const);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     throw new KernelError("kernel_input", `Part "${part?.id ?? "?"}": ${issue.path.join(".") || "part"}: ${issue.message}`, { partId: part?.id, partName: part?.name });

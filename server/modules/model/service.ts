@@ -104,7 +104,7 @@ export function modelService(deps: ModelServiceDeps) {
   /** The kernel's own guard, on this thread: a degenerate part never reaches a worker. */
   function guard(parts: ResolvedPart[]): void {
     try {
-      for (const part of parts) validatePartForKernel(part);
+      for (const part of parts) validatePartForKernel(part, { schema: false });
     } catch (err) {
       throw kernelErrorToHttp(err);
     }
