@@ -1,5 +1,4 @@
 import type { Axis, ChamferFeature, Direction } from "@/engine/parts/features";
-import { KernelError } from "../errors";
 import { axisIndex, directionAxis } from "../frame";
 import type { BaseInfo, BaseModifierBuilder } from "./types";
 
@@ -93,9 +92,4 @@ export function chamferFits(f: ChamferFeature, base: BaseInfo): string | null {
   const ext = [0, 1, 2].map((i) => base.max[i]! - base.min[i]!);
   if (!(f.size * 2 < Math.min(...ext))) return `a ${f.size} mm chamfer is more than half the block's smallest side (${Math.min(...ext)} mm)`;
   return null;
-}
-
-export function assertChamferFits(f: ChamferFeature, base: BaseInfo): void {
-  const problem = chamferFits(f, base);
-  if (problem) throw new KernelError("kernel_input", problem);
 }
