@@ -1,14 +1,15 @@
 /**
  * The drawing pack: for each built-in template, the PDF pack (every part sheet, the assembly sheet, the
  * cut list and operation sheet) through the export service the download routes use, built in a warm
- * kernel worker: cold (parameters not seen before); then, for the same work done on the calling thread,
+ * kernel worker: cold (parameters not seen before, projection cache emptied), and again with the same
+ * parameters (a second download: projections remembered); then, for the same work done on the calling thread,
  * how much of it is the kernel's projections and how much the drawing layout and PDF; then the web
  * process's event-loop delay (p99, max) while 4 packs are built at once in the workers.
  * Targets: PDF pack ≤ 2 s; event-loop p99 ≤ 50 ms.
  */
 import { monitorEventLoopDelay } from "node:perf_hooks";
 import { evaluateTemplate, type CompiledTemplate } from "@/engine";
-import { buildExport } from "@server/exporters/build-export";
+import { buildExport, clearProjectionCache } from "@server/exporters/build-export";
 import { createKernelPool, kernelConfigFromEnv, type KernelPool } from "@server/kernel";
 import { builtInTemplates } from "@server/templates";
 import { ms, percentiles, type BenchModule } from "./types";
@@ -73,12 +74,18 @@ export const drawingsBench: BenchModule = {
       for (const compiled of templates.list()) await pack(compiled, variant(compiled, 30), pool);
       for (const compiled of templates.list()) {
         const totals: number[] = [];
+        const again: number[] = [];
         let bytes = 0;
         for (let i = 0; i < COLD_VARIANTS; i++) {
+          clearProjectionCache();
           const s = performance.now();
           bytes = await pack(compiled, variant(compiled, i), pool);
           totals.push(performance.now() - s);
+          const s2 = performance.now();
+          await pack(compiled, variant(compiled, i), pool);
+          again.push(performance.now() - s2);
         }
+        clearProjectionCache();
         // The same work on this thread, to see where the time goes.
         const sSplit = performance.now();
         await pack(compiled, variant(compiled, 20), clock.kernel, false);
@@ -87,13 +94,14 @@ export const drawingsBench: BenchModule = {
         const t = percentiles(totals);
         const ok = t.median <= TARGETS.packMs ? "ok" : "OVER TARGET";
         console.log(
-          `  ${compiled.template.id.padEnd(22)} pack median ${ms(t.median)} (max ${ms(Math.max(...totals))}), ${(bytes / 1024).toFixed(0)} KB  (${ok}); split: kernel ${ms(kernelMs)}, drawing + PDF ${ms(split - kernelMs)}`,
+          `  ${compiled.template.id.padEnd(22)} cold pack median ${ms(t.median)} (max ${ms(Math.max(...totals))}), ${(bytes / 1024).toFixed(0)} KB  (${ok}); again ${ms(percentiles(again).median)}; split: kernel ${ms(kernelMs)}, drawing + PDF ${ms(split - kernelMs)}`,
         );
       }
       const stop = templates.get("cam-vise-stop") ?? templates.list()[0]!;
       const loop = monitorEventLoopDelay({ resolution: 5 });
       loop.enable();
       const s = performance.now();
+      clearProjectionCache();
       await Promise.all([0, 1, 2, 3].map((i) => pack(stop, variant(stop, 10 + i), pool)));
       loop.disable();
       const p99 = loop.percentile(99) / 1e6;

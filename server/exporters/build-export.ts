@@ -176,6 +176,12 @@ const partViews = new LRUCache<string, ProjectedPart>({ max: 256 });
 const assemblyViews = new LRUCache<string, ProjectedAssembly>({ max: 32 });
 const assemblyKey = (parts: ResolvedPart[]) => canonicalHash(parts);
 
+/** Forgets the remembered projections (benchmarks measure cold packs with it). */
+export function clearProjectionCache(): void {
+  partViews.clear();
+  assemblyViews.clear();
+}
+
 /** Projects whatever of `parts` (and the assembly) this request has not projected yet. */
 async function project(pack: Pack, deps: ExportDeps, parts: ResolvedPart[], assembly: boolean): Promise<{ parts: ProjectedPart[]; assembly?: ProjectedAssembly }> {
   for (const p of parts) {
