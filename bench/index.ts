@@ -6,10 +6,11 @@
 import { evaluateBench } from "./evaluate";
 import { httpBench } from "./http";
 import { kernelBench } from "./kernel";
+import { drawingsBench } from "./drawings";
 import os from "node:os";
 import type { BenchModule } from "./types";
 
-const modules: BenchModule[] = [evaluateBench, httpBench, kernelBench];
+const modules: BenchModule[] = [evaluateBench, httpBench, kernelBench, drawingsBench];
 
 async function main(names: string[]): Promise<void> {
   const chosen = names.length > 0 ? modules.filter((m) => names.includes(m.name)) : modules;

@@ -8,6 +8,7 @@
  * The drawing model is built once per request and every format is written from it.
  */
 import JSZip from "jszip";
+import { LRUCache } from "lru-cache";
 import { Readable } from "node:stream";
 import { buildAssemblySheet } from "@/engine/drawing/assemblySheet";
 import { madeToSuitNote } from "@/engine/drawing/madeToSuit";
@@ -24,6 +25,7 @@ import type { ResolvedPart } from "@/engine/parts/features";
 import type { Template } from "@/engine/template/schema";
 import type { KernelPool } from "@server/kernel";
 import type { ProjectTaskInput, ProjectTaskOutput, StepTaskInput, StepTaskOutput, StlTaskInput, StlTaskOutput } from "@server/kernel/tasks";
+import { canonicalHash } from "@server/kernel/canonical";
 import { shapesToDxf } from "./dxf";
 import { sheetsToPdf } from "./pdf";
 import { sheetToSvg } from "./svg";
@@ -56,6 +58,8 @@ export interface ExportRequest {
   owner?: string;
   /** Top spindle speed of the user's machine, rev/min, for the operation sheet. */
   machineMaxRpm?: number;
+  /** Views already projected (the caller projects parts in parallel on the pool before the export job). */
+  projections?: { parts: ProjectedPart[]; assembly?: ProjectedAssembly };
 }
 
 export interface ExportFile {
@@ -67,6 +71,21 @@ export interface ExportFile {
 export interface ExportDeps {
   kernel: Pick<KernelPool, "run">;
   signal?: AbortSignal;
+  /**
+   * Build the whole file inside a kernel worker (the "export" task), so laying out the sheets and writing
+   * the PDF never holds up the web server's event loop. Default true; the task itself runs with false.
+   * Input mistakes (unknown part, missing part) are found on the caller's thread first.
+   */
+  inWorker?: boolean;
+  /** Time limit of the worker job, ms (a whole pack is several kernel jobs in one; default 120 s). */
+  timeoutMs?: number;
+}
+
+/** What the "export" kernel task returns. */
+export interface ExportTaskOutput {
+  fileName: string;
+  contentType: string;
+  bytes: Uint8Array;
 }
 
 const CONTENT_TYPES: Record<ExportFormat, string> = {
@@ -128,7 +147,8 @@ function packFor(req: ExportRequest): Pack {
     date: req.date,
     failingChecks: failing,
   };
-  return { req, parts, common, projected: new Map() };
+  const projected = new Map((req.projections?.parts ?? []).map((p) => [p.partId, p] as const));
+  return { req, parts, common, projected, ...(req.projections?.assembly ? { assembly: req.projections.assembly } : {}) };
 }
 
 function partInput(pack: Pack, part: ResolvedPart, projected: ProjectedPart, sheetNumber: number, sheetCount: number): PartSheetInput {
@@ -147,8 +167,31 @@ function partInput(pack: Pack, part: ResolvedPart, projected: ProjectedPart, she
   };
 }
 
+/**
+ * Projections made recently in this process, by the hash of the part's canonical JSON (the assembly by
+ * all its parts): a PDF followed by the DXF or the ZIP of the same design projects each part once.
+ * Bounded by count; a view set is tens of kilobytes.
+ */
+const partViews = new LRUCache<string, ProjectedPart>({ max: 256 });
+const assemblyViews = new LRUCache<string, ProjectedAssembly>({ max: 32 });
+const assemblyKey = (parts: ResolvedPart[]) => canonicalHash(parts);
+
+/** Forgets the remembered projections (benchmarks measure cold packs with it). */
+export function clearProjectionCache(): void {
+  partViews.clear();
+  assemblyViews.clear();
+}
+
 /** Projects whatever of `parts` (and the assembly) this request has not projected yet. */
 async function project(pack: Pack, deps: ExportDeps, parts: ResolvedPart[], assembly: boolean): Promise<{ parts: ProjectedPart[]; assembly?: ProjectedAssembly }> {
+  for (const p of parts) {
+    const hit = pack.projected.has(p.id) ? undefined : partViews.get(canonicalHash(p));
+    if (hit) pack.projected.set(p.id, { ...hit, partId: p.id });
+  }
+  if (assembly && !pack.assembly) {
+    const hit = assemblyViews.get(assemblyKey(pack.parts));
+    if (hit) pack.assembly = hit;
+  }
   const missing = parts.filter((p) => !pack.projected.has(p.id));
   const needAssembly = assembly && !pack.assembly;
   // One task per part (and one for the assembly), so a pool with several workers projects them at once.
@@ -156,8 +199,15 @@ async function project(pack: Pack, deps: ExportDeps, parts: ResolvedPart[], asse
   const jobs: Promise<ProjectTaskOutput>[] = missing.map((part) => deps.kernel.run<ProjectTaskOutput>("project", { parts: [part] } satisfies ProjectTaskInput, opts));
   if (needAssembly) jobs.push(deps.kernel.run<ProjectTaskOutput>("project", { parts: [], assembly: { parts: pack.parts } } satisfies ProjectTaskInput, opts));
   for (const out of await Promise.all(jobs)) {
-    for (const p of out.parts) pack.projected.set(p.partId, p);
-    if (out.assembly) pack.assembly = out.assembly;
+    for (const p of out.parts) {
+      pack.projected.set(p.partId, p);
+      const part = missing.find((m) => m.id === p.partId);
+      if (part) partViews.set(canonicalHash(part), p);
+    }
+    if (out.assembly) {
+      pack.assembly = out.assembly;
+      assemblyViews.set(assemblyKey(pack.parts), out.assembly);
+    }
   }
   return { parts: parts.map((p) => pack.projected.get(p.id)!), ...(assembly && pack.assembly ? { assembly: pack.assembly } : {}) };
 }
@@ -202,6 +252,33 @@ async function partDxf(pack: Pack, deps: ExportDeps, part: ResolvedPart): Promis
   return shapesToDxf(buildPartModelSpace(partInput(pack, part, projected.parts[0]!, 1, 1)), pack.req.units);
 }
 
+/** The projections a format draws from. */
+function viewsNeeded(pack: Pack): { parts: ResolvedPart[]; assembly: boolean } {
+  const { format, part } = pack.req;
+  const chosen = part && part !== "assembly" ? pack.parts.filter((p) => p.id === part) : undefined;
+  switch (format) {
+    case "pdf":
+    case "zip":
+      return chosen ? { parts: chosen, assembly: false } : { parts: pack.parts, assembly: pack.parts.length > 1 && (pack.req.template.drawing?.assemblySheet ?? true) };
+    case "svg":
+      return part === "assembly" ? { parts: [], assembly: true } : { parts: chosen ?? pack.parts.slice(0, 1), assembly: false };
+    case "dxf":
+      return { parts: chosen ?? pack.parts.slice(0, 1), assembly: false };
+    default:
+      return { parts: [], assembly: false };
+  }
+}
+
+/** Refuses, before any work, a format that needs one part when none (or "assembly") was chosen. */
+function checkChoices(pack: Pack): void {
+  const { format, part } = pack.req;
+  if (format === "dxf") requirePart(pack, format);
+  if (format === "stl" && part !== "assembly") requirePart(pack, format);
+  if (format === "svg" && !part && pack.parts.length > 1) {
+    throw new ExportInputError(`An SVG holds one sheet: choose a part (${pack.parts.map((p) => p.id).join(", ")}) or "assembly".`, "part");
+  }
+}
+
 function requirePart(pack: Pack, format: string): ResolvedPart {
   const id = pack.req.part;
   if (!id || id === "assembly") {
@@ -230,6 +307,16 @@ function pdfMeta(pack: Pack, what: string) {
 /** Builds one export file. Throws ExportInputError for bad choices and KernelError for solid failures. */
 export async function buildExport(req: ExportRequest, deps: ExportDeps): Promise<ExportFile> {
   const pack = packFor(req);
+  checkChoices(pack);
+  // The cut list is a few rows of text: made here, no worker needed.
+  if ((deps.inWorker ?? true) && req.format !== "csv") {
+    // Project the parts this file shows in parallel across the pool's workers, then build the file in one.
+    const need = viewsNeeded(pack);
+    const done = need.parts.length > 0 || need.assembly ? await project(pack, deps, need.parts, need.assembly) : { parts: [] };
+    const withViews: ExportRequest = { ...req, projections: done };
+    const out = await deps.kernel.run<ExportTaskOutput>("export", withViews, { timeoutMs: deps.timeoutMs ?? 120_000, ...(deps.signal ? { signal: deps.signal } : {}) });
+    return { fileName: out.fileName, contentType: out.contentType, body: Buffer.from(out.bytes.buffer, out.bytes.byteOffset, out.bytes.byteLength) };
+  }
   const { id, version } = req.template;
   const file = (what: string, ext: string, body: Buffer | string): ExportFile => ({
     fileName: exportFileName(id, version, what, ext),

@@ -10,7 +10,7 @@ import makerjs from "makerjs";
 import PDFDocument from "pdfkit";
 import { LINE_STYLES, type DrawingSheet, type Layer, type SheetText } from "@/engine/drawing/model";
 import { fontSizeForCapHeight } from "@/engine/drawing/text/measure";
-import { DRAWING_FONTS } from "./fonts/fonts";
+import { DRAWING_FONTS, drawingFontData, type DrawingFontName } from "./fonts/fonts";
 import { toMakerModel } from "./makerModel";
 
 /** PDF points per millimetre. */
@@ -75,7 +75,7 @@ export function sheetsToPdfStream(sheets: DrawingSheet[], meta: PdfMeta): PDFKit
     margin: 0,
     info: { Title: meta.title, Author: meta.author, Subject: meta.subject ?? "", Creator: "Jigwright", Producer: "Jigwright", ...(meta.creationDate ? { CreationDate: meta.creationDate } : {}) },
   });
-  for (const [name, file] of Object.entries(DRAWING_FONTS)) doc.registerFont(name, file);
+  for (const name of Object.keys(DRAWING_FONTS) as DrawingFontName[]) doc.registerFont(name, drawingFontData(name));
   for (const s of sheets) drawSheet(doc, s);
   doc.end();
   return doc;

@@ -1,8 +1,8 @@
 import type { Shape3D } from "replicad";
-import type { PatternableFeature, ResolvedFeature, ResolvedPart } from "@/engine/parts/features";
+import type { ChamferFeature, PatternableFeature, ResolvedFeature, ResolvedPart } from "@/engine/parts/features";
 import { cutMany, firstSolid, unifyFaces } from "./boolean";
 import { featureBuilders } from "./builders";
-import type { BaseInfo, BuildContext, CosmeticThread, ToolResult } from "./builders/types";
+import type { BaseInfo, BuildContext, CosmeticThread, ModifyBuilder, ToolResult } from "./builders/types";
 import { describeFeature, formatParameters, KernelError } from "./errors";
 import { describeKernelException, type LoadedKernel } from "./oc";
 import { boundsOf, checkShape } from "./shape-check";
@@ -59,6 +59,33 @@ function contextFor(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo, in
 /** Indices of the features that are built (a resolved feature with `when: false` is left out). */
 const activeIndices = (part: ResolvedPart) => part.features.map((f, i) => (f.when === false ? -1 : i)).filter((i) => i >= 0);
 
+/** The active features the base builder folds into the base (chamfers), with their indices. */
+function baseModifiers(part: ResolvedPart): { indices: number[]; chamfers: ChamferFeature[] } {
+  const indices = activeIndices(part).filter((i) => featureBuilders.get(part.features[i]!.kind)?.role === "base-modifier");
+  return { indices, chamfers: indices.map((i) => part.features[i] as ChamferFeature) };
+}
+
+/** Builds the base with its modifiers; a failure is blamed on the last modifier when there are any. */
+function createBase(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo, index: number, withModifiers: boolean): Shape3D {
+  const builder = featureBuilders.get(part.features[index]!.kind);
+  if (!builder || builder.role !== "base") throw featureError(part, index, new KernelError("kernel_input", "the first feature must be a block or turned base"), kernel);
+  const mods = withModifiers ? baseModifiers(part) : { indices: [], chamfers: [] };
+  try {
+    const shape = builder.create(part.features[index] as never, contextFor(kernel, part, base, index), mods.chamfers);
+    if (mods.indices.length > 0) {
+      const check = checkShape(kernel, shape);
+      if (!check.valid) {
+        shape.delete();
+        throw new KernelError("kernel_invalid", check.problem ?? "not a valid solid");
+      }
+    }
+    return shape;
+  } catch (err) {
+    const blame = mods.indices.length > 0 ? mods.indices[mods.indices.length - 1]! : index;
+    throw err instanceof KernelError && err.code === "kernel_invalid" ? invalidError(part, blame, err.message) : featureError(part, blame, err, kernel);
+  }
+}
+
 interface Pending {
   tools: Shape3D[];
   indices: number[];
@@ -66,8 +93,9 @@ interface Pending {
 
 /**
  * Builds a resolved part: validates it before any kernel call, creates the base, then applies the
- * features in order. Runs of cutting features are cut in one Boolean operation (about twice as fast as one
- * cut per feature); a modifying feature (chamfer) first applies the cuts before it. Coplanar faces are
+ * features in order. Chamfers are folded into the base (builders/chamfer.ts). Runs of cutting features
+ * are cut in one Boolean operation (about twice as fast as one cut per feature); a modifying feature first
+ * applies the cuts before it. Coplanar faces are
  * unified once at the end, and the result must be one valid solid of positive volume.
  * If a batched cut throws or the result is not sound, the part is rebuilt one feature at a time, checking
  * after each, to name the feature that broke it (the slow path runs only on failure).
@@ -86,14 +114,7 @@ function buildFast(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo): Bu
   const threads: CosmeticThread[] = [];
   const indices = activeIndices(part);
   const first = indices[0]!;
-  const baseBuilder = featureBuilders.get(part.features[first]!.kind);
-  if (!baseBuilder || baseBuilder.role !== "base") throw featureError(part, first, new KernelError("kernel_input", "the first feature must be a block or turned base"), kernel);
-  let shape: Shape3D;
-  try {
-    shape = baseBuilder.create(part.features[first] as never, contextFor(kernel, part, base, first));
-  } catch (err) {
-    throw featureError(part, first, err, kernel);
-  }
+  let shape: Shape3D = createBase(kernel, part, base, first, true);
   const pending: Pending = { tools: [], indices: [] };
   const flush = () => {
     if (pending.tools.length === 0) return;
@@ -112,6 +133,7 @@ function buildFast(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo): Bu
       const f = part.features[index]!;
       const builder = featureBuilders.get(f.kind);
       if (!builder || builder.role === "base") throw featureError(part, index, new KernelError("kernel_input", builder ? "only the first feature may be a base" : `no solid builder for "${f.kind}"`), kernel);
+      if (builder.role === "base-modifier") continue;
       const ctx = contextFor(kernel, part, base, index);
       if (builder.role === "tool") {
         try {
@@ -126,7 +148,7 @@ function buildFast(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo): Bu
       }
       flush();
       try {
-        const { shape: out, threads: t } = builder.apply(shape, f as never, ctx);
+        const { shape: out, threads: t } = (builder as ModifyBuilder).apply(shape, f as never, ctx);
         if (out !== shape) shape.delete();
         shape = out;
         threads.push(...t);
@@ -164,19 +186,24 @@ function diagnose(kernel: LoadedKernel, part: ResolvedPart, base: BaseInfo, orig
   let shape: Shape3D | null = null;
   const threads: CosmeticThread[] = [];
   try {
-    for (const index of activeIndices(part)) {
+    const indices = activeIndices(part);
+    for (const index of indices) {
       const f = part.features[index]!;
       const builder = featureBuilders.get(f.kind)!;
       const ctx = contextFor(kernel, part, base, index);
       let next: Shape3D;
       try {
-        if (builder.role === "base") next = builder.create(f as never, ctx);
-        else if (builder.role === "tool") {
+        // Modifiers are in the base from the start; the base is checked on its own first.
+        if (builder.role === "base-modifier") continue;
+        if (builder.role === "base") {
+          createBase(kernel, part, base, index, false).delete();
+          next = createBase(kernel, part, base, index, true);
+        } else if (builder.role === "tool") {
           const { tools, threads: t } = builder.tool(f as never, ctx);
           threads.push(...t);
           next = tools.length > 0 ? cutMany(kernel, shape!, tools) : shape!;
           tools.forEach((x) => x.delete());
-        } else next = builder.apply(shape!, f as never, ctx).shape;
+        } else next = (builder as ModifyBuilder).apply(shape!, f as never, ctx).shape;
       } catch (err) {
         return featureError(part, index, err, kernel);
       }

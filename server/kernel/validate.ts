@@ -2,6 +2,7 @@ import { resolvedVocabulary, type PatternableFeature, type ResolvedFeature, type
 import { describeFeature, formatParameters, KernelError } from "./errors";
 import type { BaseInfo } from "./builders/types";
 import { metricThread } from "@/engine/parts/threads";
+import { chamferFits } from "./builders/chamfer";
 import { baseGeometry } from "@/engine/parts/frame";
 import { directionAxis, type Vec3 } from "./frame";
 
@@ -63,8 +64,11 @@ function holeLike(f: { diameter: number; chamfer?: number; counterbore?: { diame
 }
 
 function patternableProblems(f: PatternableFeature, base: BaseInfo): Problem[] {
+  if (base.kind === "turned" && (f.kind === "slot" || f.kind === "pocket")) return [`a ${f.kind} is for blocks, not turned parts (features.ts)`];
+  const radial = base.kind === "turned" && directionAxis(f.direction) !== "z";
   switch (f.kind) {
     case "hole":
+      if (radial && (f.counterbore || f.countersink || f.chamfer)) return ["a cross hole in a turned part takes no counterbore, countersink or chamfer", ...holeLike(f)];
       return holeLike(f);
     case "thread": {
       const t = metricThread(f.designation);
@@ -86,7 +90,6 @@ function patternableProblems(f: PatternableFeature, base: BaseInfo): Problem[] {
         const rc = f.shape.cornerRadius ?? 0;
         if (rc > Math.min(f.shape.u, f.shape.v) / 2 + 1e-9) out.push(`corner radius ${rc} is more than half the pocket's smaller side`);
       }
-      void base;
       return out;
     }
   }
@@ -97,6 +100,9 @@ function featureProblems(f: ResolvedFeature, index: number, base: BaseInfo): Pro
     if (f.kind === "block") return [positive("size.x", f.size.x), positive("size.y", f.size.y), positive("size.z", f.size.z)];
     if (f.kind === "turned") return f.steps.flatMap((s, i) => [positive(`step ${i} diameter`, s.diameter), positive(`step ${i} length`, s.length)]);
     return ["the first feature must be a block or turned base"];
+  }
+  if (base.kind === "turned" && (f.kind === "slot" || f.kind === "pocket" || f.kind === "step" || f.kind === "v-groove")) {
+    return [`a ${f.kind} is for blocks, not turned parts (features.ts)`];
   }
   switch (f.kind) {
     case "block":
@@ -134,9 +140,8 @@ function featureProblems(f: ResolvedFeature, index: number, base: BaseInfo): Pro
       return out;
     }
     case "chamfer": {
-      const out: Problem[] = [positive("size", f.size)];
-      if (base.kind === "turned" && f.faces.some((x) => x !== "+z" && x !== "-z")) out.push("on a turned part only the end faces (+z, -z) can be chamfered");
-      return out;
+      const size = positive("size", f.size);
+      return [size ?? chamferFits(f, base)];
     }
     case "eccentric-bore": {
       if (base.kind !== "turned") return ["an eccentric bore needs a turned base"];
@@ -154,9 +159,13 @@ function featureProblems(f: ResolvedFeature, index: number, base: BaseInfo): Pro
   }
 }
 
-/** Throws a `kernel_input` KernelError naming the part and the first feature with a problem. */
-export function validatePartForKernel(part: ResolvedPart): BaseInfo {
-  const parsed = resolvedVocabulary.part.safeParse(part);
+/**
+ * Throws a `kernel_input` KernelError naming the part and the first feature with a problem.
+ * `schema: false` skips the structural (zod) check, for parts fresh from the engine's evaluator on the web
+ * thread; the worker always runs the full check before its first kernel call.
+ */
+export function validatePartForKernel(part: ResolvedPart, { schema = true }: { schema?: boolean } = {}): BaseInfo {
+  const parsed = schema ? resolvedVocabulary.part.safeParse(part) : ({ success: true } as const);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     throw new KernelError("kernel_input", `Part "${part?.id ?? "?"}": ${issue.path.join(".") || "part"}: ${issue.message}`, { partId: part?.id, partName: part?.name });

@@ -71,7 +71,7 @@ beforeAll(async () => {
   await kernel.ready();
   compiled = builtInTemplates().get("cam-vise-stop")!;
   ev = evaluateTemplate(compiled, {});
-  pack = await pdfPages((await buildExport(request({ format: "pdf" }), { kernel: memoKernel })).body);
+  pack = await pdfPages((await buildExport(request({ format: "pdf" }), { kernel: memoKernel, inWorker: false })).body);
 });
 
 afterAll(async () => {
@@ -300,7 +300,7 @@ describe("sheet layout rules", () => {
 describe("inch drawings (decimal inches, three places)", () => {
   it("the body sheet reads in inches: 40 mm → 1.575, 55 mm → 2.165, Ø8 → Ø.315 H7, and says so", async () => {
     const inchEv = evaluateTemplate(compiled, { units: "in" });
-    const file = await buildExport({ ...request({ format: "pdf", part: "body", units: "in", projection: "third" }), evaluation: inchEv }, { kernel: memoKernel });
+    const file = await buildExport({ ...request({ format: "pdf", part: "body", units: "in", projection: "third" }), evaluation: inchEv }, { kernel: memoKernel, inWorker: false });
     const { texts } = await pdfPages(file.body);
     const body = texts[0]!.join(" | ");
     for (const s of ["1.575", "2.165", "Ø.315 H7", "Dimensions in inches", "Projection: third angle", "inch"]) expect(body).toContain(s);
@@ -314,7 +314,7 @@ describe("the NOT CHECKED stamp", () => {
     const failing = evaluateTemplate(compiled, { parameters: { camEccentricity: 2.5 } });
     expect(failing.ok).toBe(false);
     const cam = failing.parts.find((p) => p.id === "cam")!;
-    const file = await buildExport({ ...request({ format: "pdf", part: "cam" }), evaluation: failing }, { kernel: memoKernel });
+    const file = await buildExport({ ...request({ format: "pdf", part: "cam" }), evaluation: failing }, { kernel: memoKernel, inWorker: false });
     const { texts } = await pdfPages(file.body);
     expect(texts[0]).toContain("NOT CHECKED — ERRORS");
     expect(texts[0]).toContain("NOT CHECKED");
@@ -327,7 +327,7 @@ describe("the NOT CHECKED stamp", () => {
 
 describe("SVG, DXF, CSV and ZIP", () => {
   it("SVG: a sheet-sized viewBox in mm, dashed hidden and centre paths, filled text", async () => {
-    const file = await buildExport(request({ format: "svg", part: "body" }), { kernel: memoKernel });
+    const file = await buildExport(request({ format: "svg", part: "body" }), { kernel: memoKernel, inWorker: false });
     const svg = file.body.toString("utf8");
     expect(file.fileName).toBe("cam-vise-stop-v1.0.0-body.svg");
     expect(svg).toMatch(/<svg [^>]*width="(297|420)mm" height="(210|297)mm" viewBox="0 0 (297 210|420 297)"/);
@@ -339,7 +339,7 @@ describe("SVG, DXF, CSV and ZIP", () => {
   });
 
   it("DXF per part at 1:1: the five layers, CENTER and DASHED line types, SOLID arrowheads, %%c text; inches when asked", async () => {
-    const mmFile = await buildExport(request({ format: "dxf", part: "body" }), { kernel: memoKernel });
+    const mmFile = await buildExport(request({ format: "dxf", part: "body" }), { kernel: memoKernel, inWorker: false });
     const dxf = new DxfParser().parseSync(mmFile.body.toString("utf8"))!;
     const layers = Object.keys(dxf.tables.layer.layers);
     for (const l of ["VISIBLE", "HIDDEN", "CENTER", "DIMENSIONS", "TEXT"]) expect(layers).toContain(l);
@@ -359,7 +359,7 @@ describe("SVG, DXF, CSV and ZIP", () => {
     const xs = on("VISIBLE", "LINE").flatMap((e) => (e as unknown as { vertices: { x: number }[] }).vertices.map((v) => v.x));
     expect(Math.max(...xs) - Math.min(...xs)).toBeGreaterThanOrEqual(40);
 
-    const inFile = await buildExport({ ...request({ format: "dxf", part: "body", units: "in" }), evaluation: evaluateTemplate(compiled, { units: "in" }) }, { kernel: memoKernel });
+    const inFile = await buildExport({ ...request({ format: "dxf", part: "body", units: "in" }), evaluation: evaluateTemplate(compiled, { units: "in" }) }, { kernel: memoKernel, inWorker: false });
     const inch = new DxfParser().parseSync(inFile.body.toString("utf8"))!;
     expect(inch.header.$INSUNITS).toBe(1);
     const circles = inch.entities.filter((e) => e.layer === "VISIBLE" && e.type === "CIRCLE") as unknown as { radius: number }[];
@@ -368,14 +368,14 @@ describe("SVG, DXF, CSV and ZIP", () => {
   });
 
   it("CSV cut list with a header row and one row per part", async () => {
-    const file = await buildExport(request({ format: "csv" }), { kernel: memoKernel });
+    const file = await buildExport(request({ format: "csv" }), { kernel: memoKernel, inWorker: false });
     const rows = file.body.toString("utf8").trim().split(/\r\n/);
     expect(rows).toHaveLength(1 + ev.parts.length);
     expect(file.contentType).toMatch(/^text\/csv/);
   });
 
   it("ZIP: the PDF, an SVG per sheet, a DXF, STEP and STL per part, the assembly STEP and the cut list", async () => {
-    const file = await buildExport(request({ format: "zip" }), { kernel: memoKernel });
+    const file = await buildExport(request({ format: "zip" }), { kernel: memoKernel, inWorker: false });
     const zip = await JSZip.loadAsync(file.body);
     const names = Object.keys(zip.files);
     const p = "cam-vise-stop-v1.0.0-";
@@ -389,8 +389,8 @@ describe("SVG, DXF, CSV and ZIP", () => {
   });
 
   it("asking for one-part formats without a part names the parts to choose from", async () => {
-    await expect(buildExport(request({ format: "dxf" }), { kernel: memoKernel })).rejects.toThrow(/choose one of body, stop-rod/);
-    await expect(buildExport(request({ format: "pdf", part: "nope" }), { kernel: memoKernel })).rejects.toThrow(/There is no part "nope"/);
+    await expect(buildExport(request({ format: "dxf" }), { kernel: memoKernel, inWorker: false })).rejects.toThrow(/choose one of body, stop-rod/);
+    await expect(buildExport(request({ format: "pdf", part: "nope" }), { kernel: memoKernel, inWorker: false })).rejects.toThrow(/There is no part "nope"/);
   });
 });
 

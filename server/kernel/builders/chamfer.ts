@@ -1,101 +1,95 @@
-import type { Shape3D } from "replicad";
-import type { Axis, Direction } from "@/engine/parts/features";
-import { KernelError } from "../errors";
-import { axisIndex, axisVector, directionAxis, scale, add, type Vec3 } from "../frame";
-import type { BaseInfo, ToolBuilder } from "./types";
-import type { LoadedKernel } from "../oc";
-
-/** How far the chamfer tools reach past the outside, so no sliver is left. */
-const CLEARANCE_MM = 0.5;
-
-/** An outside edge of the base: it runs along `along`, and `out1`, `out2` are the outward normals of its two faces. */
-interface OutsideEdge {
-  along: Axis;
-  /** A point on the edge line. */
-  point: Vec3;
-  out1: Vec3;
-  out2: Vec3;
-  key: string;
-}
-
-/** The four outside edges of one face of a block base. */
-function blockFaceEdges(face: Direction, base: BaseInfo): OutsideEdge[] {
-  const n = directionAxis(face);
-  const nIdx = axisIndex(n);
-  const nSign = face[0] === "+" ? 1 : -1;
-  const others = (["x", "y", "z"] as const).filter((a) => a !== n);
-  const edges: OutsideEdge[] = [];
-  for (const along of others) {
-    const b = others.find((a) => a !== along)!;
-    const bIdx = axisIndex(b);
-    for (const bSign of [-1, 1]) {
-      const point: Vec3 = [0, 0, 0];
-      point[nIdx] = nSign > 0 ? base.max[nIdx]! : base.min[nIdx]!;
-      point[bIdx] = bSign > 0 ? base.max[bIdx]! : base.min[bIdx]!;
-      point[axisIndex(along)] = base.min[axisIndex(along)]!;
-      const key = `${along}:${point.join(",")}`;
-      edges.push({ along, point, out1: scale(axisVector(n), nSign), out2: scale(axisVector(b), bSign), key });
-    }
-  }
-  return edges;
-}
-
-/**
- * A 45° chamfer on a straight outside edge as a cutting tool: the triangular prism {s + t < c} where s and t
- * are the depths below the edge's two faces, reaching {@link CLEARANCE_MM} into the air and past both ends.
- * On a box this removes exactly what an edge chamfer does, mitred corners included.
- */
-function edgePrism(kernel: LoadedKernel, edge: OutsideEdge, c: number, base: BaseInfo): Shape3D {
-  const { r } = kernel;
-  const ai = axisIndex(edge.along);
-  const length = base.max[ai]! - base.min[ai]! + 2;
-  const start: Vec3 = [...edge.point];
-  start[ai] = base.min[ai]! - 1;
-  // (s, t) → start − s·out1 − t·out2
-  const at = (s: number, t: number): Vec3 => add(add(start, scale(edge.out1, -s)), scale(edge.out2, -t));
-  const e = CLEARANCE_MM;
-  const face = r.makePolygon([at(-e, -e), at(c + e, -e), at(-e, c + e)]);
-  const vec = new r.Vector(scale(axisVector(edge.along), length));
-  const solid = r.basicFaceExtrusion(face, vec);
-  face.delete();
-  vec.delete();
-  return solid;
-}
-
-/** The chamfer ring at one end face of a turned base: the triangle {s + t < c} revolved about the axis. */
-function endRing(kernel: LoadedKernel, face: "+z" | "-z", c: number, base: BaseInfo & { kind: "turned" }): Shape3D {
-  const { r } = kernel;
-  const top = face === "+z";
-  const step = top ? base.steps[base.steps.length - 1]! : base.steps[0]!;
-  const R = step.diameter / 2;
-  const zEnd = top ? base.lengthMm : 0;
-  const sign = top ? 1 : -1;
-  // s = R − ρ (depth below the cylinder), t = depth below the end face.
-  const at = (s: number, t: number): [number, number, number] => [R - s, 0, zEnd - sign * t];
-  const e = CLEARANCE_MM;
-  const prof = r.makePolygon([at(-e, -e), at(c + e, -e), at(-e, c + e)]);
-  const solid = r.revolution(prof, [0, 0, 0], [0, 0, 1], 360);
-  prof.delete();
-  return solid;
-}
+import type { Axis, ChamferFeature, Direction } from "@/engine/parts/features";
+import { axisIndex, directionAxis } from "../frame";
+import type { BaseInfo, BaseModifierBuilder } from "./types";
 
 /**
  * 45° chamfers of leg `size` on the outside edges of the listed faces of the base (a block's four edges
- * around each face; a turned part's outer circle at an end face). Built as cutting tools, so they batch
- * with the other cuts; edges shared by two listed faces are cut once.
+ * around each face; a turned part's outer circle at an end face).
+ *
+ * Every other feature only removes material, and a chamfer only removes material within `size` of the
+ * base's outside edges, so the order does not matter: (B − C) − A = (B − A) − C. Chamfers are therefore
+ * built into the base itself — a turned profile gets its corners cut; a block becomes the intersection of
+ * one prism per edge direction with chamfered corners — exactly the region {s + t ≥ c} for each chamfered
+ * edge (s, t the depths below its two faces), mitred corners included. That costs one planar intersection
+ * instead of a Boolean of long thin prisms against the finished part (measured: ~5× faster).
  */
-export const chamferBuilder: ToolBuilder<"chamfer"> = {
+export const chamferBuilder: BaseModifierBuilder<"chamfer"> = {
   kind: "chamfer",
-  role: "tool",
-  tool(feature, { kernel, base }) {
-    const c = feature.size;
-    if (base.kind === "turned") {
-      if (feature.faces.some((f) => f !== "+z" && f !== "-z")) throw new KernelError("kernel_input", "On a turned part only the end faces (+z, -z) can be chamfered.");
-      const faces = [...new Set(feature.faces)] as ("+z" | "-z")[];
-      return { tools: faces.map((f) => endRing(kernel, f, c, base)), threads: [] };
-    }
-    const seen = new Map<string, OutsideEdge>();
-    for (const f of feature.faces) for (const e of blockFaceEdges(f, base)) seen.set(e.key, e);
-    return { tools: [...seen.values()].map((e) => edgePrism(kernel, e, c, base)), threads: [] };
-  },
+  role: "base-modifier",
 };
+
+/** A corner of a rectangle in the plane of two axes, chamfered by `c`. */
+interface CornerCut {
+  /** The two axes of the plane, in x, y, z order, and the side (min/max) of the corner on each. */
+  p: Axis;
+  q: Axis;
+  pSide: "min" | "max";
+  qSide: "min" | "max";
+  c: number;
+}
+
+/**
+ * For a block: the corner cuts grouped by the axis their edge runs along. An edge of face ±n running along
+ * `a` sits at the face's side of n and at one side of the third axis b.
+ */
+export function blockChamferCuts(chamfers: ChamferFeature[]): Map<Axis, CornerCut[]> {
+  const byAxis = new Map<Axis, Map<string, CornerCut>>();
+  for (const ch of chamfers) {
+    for (const face of new Set<Direction>(ch.faces)) {
+      const n = directionAxis(face);
+      const nSide = face[0] === "+" ? "max" : "min";
+      for (const along of (["x", "y", "z"] as const).filter((a) => a !== n)) {
+        const b = (["x", "y", "z"] as const).find((a) => a !== n && a !== along)!;
+        for (const bSide of ["min", "max"] as const) {
+          const [p, q] = axisIndex(n) < axisIndex(b) ? [n, b] : [b, n];
+          const pSide = p === n ? nSide : bSide;
+          const qSide = q === n ? nSide : bSide;
+          const key = `${p}${pSide}${q}${qSide}`;
+          const cuts = byAxis.get(along) ?? new Map<string, CornerCut>();
+          const prev = cuts.get(key);
+          cuts.set(key, { p, q, pSide, qSide, c: Math.max(prev?.c ?? 0, ch.size) });
+          byAxis.set(along, cuts);
+        }
+      }
+    }
+  }
+  return new Map([...byAxis].map(([a, m]) => [a, [...m.values()]]));
+}
+
+/**
+ * The outline, in the (p, q) plane, of the block's section with the listed corners cut at 45°,
+ * counter-clockwise from (min, min).
+ */
+export function chamferedRectangle(base: BaseInfo, p: Axis, q: Axis, cuts: CornerCut[]): [number, number][] {
+  const P0 = base.min[axisIndex(p)]!, P1 = base.max[axisIndex(p)]!;
+  const Q0 = base.min[axisIndex(q)]!, Q1 = base.max[axisIndex(q)]!;
+  const cut = (ps: "min" | "max", qs: "min" | "max") => cuts.find((k) => k.pSide === ps && k.qSide === qs)?.c ?? 0;
+  const pts: [number, number][] = [];
+  const corner = (ps: "min" | "max", qs: "min" | "max", incoming: [number, number], outgoing: [number, number]) => {
+    const c = cut(ps, qs);
+    const at: [number, number] = [ps === "min" ? P0 : P1, qs === "min" ? Q0 : Q1];
+    if (c <= 0) pts.push(at);
+    else pts.push([at[0] - incoming[0] * c, at[1] - incoming[1] * c], [at[0] + outgoing[0] * c, at[1] + outgoing[1] * c]);
+  };
+  // Going round counter-clockwise: (P0,Q0) → (P1,Q0) → (P1,Q1) → (P0,Q1); direction vectors of the sides.
+  corner("min", "min", [0, -1], [1, 0]);
+  corner("max", "min", [1, 0], [0, 1]);
+  corner("max", "max", [0, 1], [-1, 0]);
+  corner("min", "max", [-1, 0], [0, -1]);
+  return pts;
+}
+
+/** Checks the chamfers fit the base (a leg must leave the face it cuts). */
+export function chamferFits(f: ChamferFeature, base: BaseInfo): string | null {
+  if (base.kind === "turned") {
+    if (f.faces.some((x) => x !== "+z" && x !== "-z")) return "on a turned part only the end faces (+z, -z) can be chamfered";
+    for (const face of f.faces) {
+      const step = face === "+z" ? base.steps[base.steps.length - 1]! : base.steps[0]!;
+      if (!(f.size < step.diameter / 2 && f.size < step.length)) return `a ${f.size} mm chamfer does not fit the Ø${step.diameter} × ${step.length} end step`;
+    }
+    return null;
+  }
+  const ext = [0, 1, 2].map((i) => base.max[i]! - base.min[i]!);
+  if (!(f.size * 2 < Math.min(...ext))) return `a ${f.size} mm chamfer is more than half the block's smallest side (${Math.min(...ext)} mm)`;
+  return null;
+}

@@ -1,5 +1,5 @@
 import type { Shape3D } from "replicad";
-import type { Direction, PatternableFeature, Point3, ResolvedFeature, ResolvedPart } from "@/engine/parts/features";
+import type { ChamferFeature, Direction, PatternableFeature, Point3, ResolvedFeature, ResolvedPart } from "@/engine/parts/features";
 import type { BaseGeometry } from "@/engine/parts/frame";
 import type { LoadedKernel } from "../oc";
 import type { Vec3 } from "../frame";
@@ -56,11 +56,20 @@ export interface ToolResult {
 
 export type FeatureOf<K extends ResolvedFeature["kind"]> = Extract<ResolvedFeature, { kind: K }>;
 
-/** Creates the first solid of a part. */
+/** Creates the first solid of a part, with the part's base modifiers (chamfers) already applied. */
 export interface BaseBuilder<K extends ResolvedFeature["kind"] = ResolvedFeature["kind"]> {
   kind: K;
   role: "base";
-  create(feature: FeatureOf<K>, ctx: BuildContext): Shape3D;
+  create(feature: FeatureOf<K>, ctx: BuildContext, chamfers: ChamferFeature[]): Shape3D;
+}
+
+/**
+ * A feature the base builder folds into the base solid (it only trims the base's outside edges, so it
+ * commutes with every cut); the registry entry marks the kind as handled.
+ */
+export interface BaseModifierBuilder<K extends ResolvedFeature["kind"] = ResolvedFeature["kind"]> {
+  kind: K;
+  role: "base-modifier";
 }
 
 /** Cuts tools out of the current solid (the cut itself is done by the part builder). */
@@ -78,7 +87,7 @@ export interface ModifyBuilder<K extends ResolvedFeature["kind"] = ResolvedFeatu
   apply(shape: Shape3D, feature: FeatureOf<K>, ctx: BuildContext): { shape: Shape3D; threads: CosmeticThread[] };
 }
 
-export type FeatureBuilder = BaseBuilder | ToolBuilder | ModifyBuilder;
+export type FeatureBuilder = BaseBuilder | ToolBuilder | ModifyBuilder | BaseModifierBuilder;
 
 /** A little slack so tools start just outside their entry face and never leave a sliver face behind. */
 export const ENTRY_CLEARANCE_MM = 0.1;

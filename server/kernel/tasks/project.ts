@@ -32,7 +32,8 @@ export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
       return { partId: part.id, views: projectShape(ctx.oc, built.shape.wrapped, viewsForPart(part)) };
     });
     if (!input.assembly || input.assembly.parts.length === 0) return { parts };
-    const names = input.assembly.views ?? ["front", "top", "right"];
+    // Front and side by side: the side view shows how the parts stack and hook; they fit a sheet at 1:1 more often than three views.
+    const names = input.assembly.views ?? ["front", "right"];
     const frames = names.map((n) => viewFrame("block", n));
     const copies: Shape3D[] = [];
     const anchors: AssemblyAnchor[] = [];
