@@ -5,11 +5,17 @@
  * middleware (headers, request log, session from MariaDB, body parsing) and the ratio shows what the
  * evaluation itself costs. Target: ratio ≥ 0.5.
  *
+ * The load generator (autocannon's own command) runs in a child process, as a load generator on another
+ * machine would: run in the server's process it would take the server's thread, and the route that sends
+ * the bigger answer (the cam curve) would also pay for the client parsing it.
+ *
  * Needs the project's test MariaDB (started and migrated on demand, as the API tests do).
  */
+import { execFile } from "node:child_process";
+import { createRequire } from "node:module";
 import http from "node:http";
 import type { AddressInfo } from "node:net";
-import autocannon from "autocannon";
+import path from "node:path";
 import { createTestApp } from "../tests/api/helpers/app";
 import { builtInTemplates } from "@server/templates";
 import type { BenchModule } from "./types";
@@ -25,9 +31,30 @@ interface Result {
   errors: number;
 }
 
-function run(options: Record<string, unknown>): Promise<Result> {
+const autocannonCli = path.join(path.dirname(createRequire(import.meta.url).resolve("autocannon/package.json")), "autocannon.js");
+
+interface Load {
+  url: string;
+  method?: "GET" | "POST";
+  headers: Record<string, string>;
+  body?: string;
+}
+
+/** One autocannon run in a child process; its `--json` report on stdout. */
+function run(load: Load): Promise<Result> {
+  const args = [autocannonCli, "--json", "-c", String(CONNECTIONS), "-d", String(SECONDS), "-m", load.method ?? "GET"];
+  for (const [k, v] of Object.entries(load.headers)) args.push("-H", `${k}=${v}`);
+  if (load.body !== undefined) args.push("-b", load.body);
+  args.push(load.url);
   return new Promise((resolve, reject) => {
-    autocannon({ connections: CONNECTIONS, duration: SECONDS, ...options }, (err: unknown, result: Result) => (err ? reject(err) : resolve(result)));
+    execFile(process.execPath, args, { maxBuffer: 16 * 1024 * 1024 }, (err, stdout, stderr) => {
+      if (err) return reject(new Error(`autocannon failed: ${stderr || err.message}`));
+      try {
+        resolve(JSON.parse(stdout) as Result);
+      } catch {
+        reject(new Error(`autocannon printed no JSON report: ${stdout.slice(0, 200)}`));
+      }
+    });
   });
 }
 

@@ -1,5 +1,0 @@
-/** autocannon ships no types; the bench uses only its callback form. */
-declare module "autocannon" {
-  function autocannon(options: Record<string, unknown>, callback: (err: unknown, result: never) => void): unknown;
-  export default autocannon;
-}
