@@ -18,6 +18,8 @@ export interface CamCurveRow {
   clampForceN: number | null;
   selfLocking: boolean;
   engaged: boolean;
+  /** Rise (wedge) angle at this point; when the rows carry it, the table shows a column for it. */
+  riseAngleDeg?: number;
 }
 
 /** How a quantity is shown: its symbol, the factor from the calculator's unit (mm, N) and the decimals. */
@@ -36,7 +38,15 @@ export interface CamCurveChartProps {
   force: ShownUnit;
   /** Heading of the figure. */
   title?: string;
+  /**
+   * Also draw, dashed, the force the cam would press with had it met the work earlier in its turn (a
+   * thicker workpiece or a smaller gap): for a learner trying what a different setting does.
+   */
+  showEarlierForce?: boolean;
 }
+
+/** Plain lines, drawn at once: the chart follows typing, and an animation would lag behind it. */
+const plainLine = { dot: false, isAnimationActive: false } as const;
 
 const trim = (value: number, decimals: number) => {
   const text = value.toFixed(decimals);
@@ -56,12 +66,10 @@ export function CamCurveChart({
   length,
   force,
   title = "Lift and clamping force over the turn",
+  showEarlierForce = false,
 }: CamCurveChartProps) {
-  const rows = curve.map((p) => ({
-    angleDeg: p.angleDeg,
-    lift: p.liftMm * length.perBase,
-    force: p.engaged && p.clampForceN !== null ? p.clampForceN * force.perBase : null,
-  }));
+  const rows = chartRows(curve, engageAngleDeg, force.perBase, length.perBase);
+  const withRise = curve.some((p) => p.riseAngleDeg !== undefined);
   // Lift at engagement: e(1 − cos φ) with e = throw / 2 (a circular cam's lift from its lowest point).
   const engageLift = (throwMm / 2) * (1 - Math.cos((engageAngleDeg * Math.PI) / 180)) * length.perBase;
   const slips = slipRanges(curve);
@@ -172,8 +180,7 @@ export function CamCurveChart({
               name="lift"
               stroke="var(--color-steel-800)"
               strokeWidth={2.5}
-              dot={false}
-              isAnimationActive={false}
+              {...plainLine}
             />
             <Line
               yAxisId="force"
@@ -181,10 +188,20 @@ export function CamCurveChart({
               name="clamping force"
               stroke="var(--color-spark-600)"
               strokeWidth={2.5}
-              dot={false}
-              isAnimationActive={false}
+              {...plainLine}
               connectNulls={false}
             />
+            {showEarlierForce ? (
+              <Line
+                yAxisId="force"
+                dataKey="earlierForce"
+                name="force if it met the work here"
+                stroke="var(--color-spark-600)"
+                strokeDasharray="4 4"
+                strokeOpacity={0.6}
+                {...plainLine}
+              />
+            ) : null}
             <Tooltip
               formatter={(value, name) => {
                 const v = typeof value === "number" ? value : Number(value);
@@ -197,6 +214,12 @@ export function CamCurveChart({
           </LineChart>
         </ResponsiveContainer>
       </div>
+      {showEarlierForce ? (
+        <p className="mt-1 text-sm text-steel-600">
+          The dashed force line is what the cam would press with if it met the work earlier in its turn (a
+          thicker workpiece or a smaller gap).
+        </p>
+      ) : null}
       <details className="mt-2">
         <summary className="cursor-pointer rounded font-semibold text-steel-800">
           Show the figures as a table
@@ -212,6 +235,11 @@ export function CamCurveChart({
                 <th scope="col" className="px-2 py-1">
                   lift ({length.symbol})
                 </th>
+                {withRise ? (
+                  <th scope="col" className="px-2 py-1">
+                    rise angle
+                  </th>
+                ) : null}
                 <th scope="col" className="px-2 py-1">
                   force ({force.symbol})
                 </th>
@@ -225,6 +253,11 @@ export function CamCurveChart({
                 <tr key={p.angleDeg} className={p.engaged ? "text-steel-900" : "text-steel-600"}>
                   <td className="px-2 py-0.5">{p.angleDeg}°</td>
                   <td className="px-2 py-0.5">{trim(p.liftMm * length.perBase, length.decimals)}</td>
+                  {withRise ? (
+                    <td className="px-2 py-0.5">
+                      {p.riseAngleDeg === undefined ? "—" : `${trim(p.riseAngleDeg, 2)}°`}
+                    </td>
+                  ) : null}
                   <td className="px-2 py-0.5">
                     {p.engaged && p.clampForceN !== null
                       ? trim(p.clampForceN * force.perBase, force.decimals)
@@ -239,6 +272,27 @@ export function CamCurveChart({
       </details>
     </figure>
   );
+}
+
+/**
+ * The curve in shown units. `force` runs from engagement on; `earlierForce` is the same force up to the
+ * engagement point, so the two lines meet there.
+ */
+export function chartRows(
+  curve: readonly CamCurveRow[],
+  engageAngleDeg: number,
+  forcePerBase: number,
+  lengthPerBase: number,
+): Array<{ angleDeg: number; lift: number; force: number | null; earlierForce: number | null }> {
+  return curve.map((p) => {
+    const shown = p.clampForceN === null ? null : p.clampForceN * forcePerBase;
+    return {
+      angleDeg: p.angleDeg,
+      lift: p.liftMm * lengthPerBase,
+      force: p.engaged ? shown : null,
+      earlierForce: p.engaged && p.angleDeg > engageAngleDeg + 1e-9 ? null : shown,
+    };
+  });
 }
 
 /** Turn ranges where the cam would not hold, widened by half a 5° step so a single point still shows. */

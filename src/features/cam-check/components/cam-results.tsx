@@ -3,8 +3,8 @@ import { cn } from "@/components/ui/cn";
 import type { EccentricCamInput } from "@/engine/calculators/eccentric-cam/schema";
 import type { CamResult } from "../api/cam-result-schema";
 import type { CamFieldKey } from "../model/fields";
-import type { UnitSystem } from "../model/units";
-import { CamChart } from "./cam-chart";
+import { unitOf, type Quantity, type UnitSystem } from "../model/units";
+import { CamCurveChart, type ShownUnit } from "@/components/charts/cam-curve-chart";
 import { CamFigures } from "./cam-figures";
 import { Cautions } from "./cautions";
 import { Explanation } from "./explanation";
@@ -12,6 +12,13 @@ import { MomentBalance } from "./moment-balance";
 import { Sources } from "./sources";
 import { Suggestions } from "./suggestions";
 import { Verdict } from "./verdict";
+
+/** A unit of the cam check in the shape the shared chart takes; forces to whole newtons or 0.1 lbf. */
+function shownUnit(system: UnitSystem, quantity: Quantity): ShownUnit {
+  const info = unitOf(system, quantity);
+  const decimals = quantity === "force" ? (system === "inch" ? 1 : 0) : info.decimals;
+  return { symbol: info.symbol, perBase: info.fromBase, decimals };
+}
 
 /**
  * Everything computed for one cam. Memoised: typing changes the inputs on every key, but this (and its
@@ -31,7 +38,7 @@ export const CamResults = memo(function CamResults({
   updating: boolean;
   onTry: (key: CamFieldKey, baseValue: number) => void;
 }) {
-  const { result, input } = shown;
+  const { result } = shown;
   return (
     <div
       className={cn("space-y-6 transition-opacity", stale ? "opacity-70" : undefined)}
@@ -47,7 +54,15 @@ export const CamResults = memo(function CamResults({
       <Explanation result={result}>
         <MomentBalance result={result} system={system} />
       </Explanation>
-      <CamChart result={result} system={system} gapMm={input.gap} />
+      <CamCurveChart
+        curve={result.curve}
+        engageAngleDeg={result.engageAngleDeg}
+        throwMm={result.throwMm}
+        workingZone={result.workingZone}
+        length={shownUnit(system, "length")}
+        force={shownUnit(system, "force")}
+        showEarlierForce
+      />
       <Suggestions suggestions={result.suggestions} system={system} onTry={onTry} />
       <Sources sources={result.sources} zoneBasis={result.workingZone.basis} />
     </div>
