@@ -15,7 +15,7 @@ import { madeToSuitNote } from "@/engine/drawing/madeToSuit";
 import { engineFits, engineThreads } from "@/engine/drawing/lookups";
 import type { DrawingSheet, SheetSizeName } from "@/engine/drawing/model";
 import { buildPartModelSpace, buildPartSheet, type PartSheetInput, type SheetCommon } from "@/engine/drawing/partSheet";
-import type { ProjectedAssembly, ProjectedPart } from "@/engine/drawing/projection";
+import type { ProjectedAssembly, ProjectedPart, ViewName } from "@/engine/drawing/projection";
 import type { ToleranceClass } from "@/engine/drawing/sheet/partNotes";
 import { cutListDocument, operationDocument, tablePageCount, tableSheets } from "@/engine/drawing/tableSheets";
 import type { Evaluation } from "@/engine/evaluate";
@@ -120,6 +120,8 @@ interface Pack {
   /** Projections already made for this request (one kernel call per part, however many formats use it). */
   projected: Map<string, ProjectedPart>;
   assembly?: ProjectedAssembly;
+  /** The template's `drawing.views` for parts that do not list their own (else the engine's default). */
+  defaultViews?: ViewName[];
 }
 
 function packFor(req: ExportRequest): Pack {
@@ -148,7 +150,15 @@ function packFor(req: ExportRequest): Pack {
     failingChecks: failing,
   };
   const projected = new Map((req.projections?.parts ?? []).map((p) => [p.partId, p] as const));
-  return { req, parts, common, projected, ...(req.projections?.assembly ? { assembly: req.projections.assembly } : {}) };
+  const defaultViews = req.template.drawing?.views;
+  return {
+    req,
+    parts,
+    common,
+    projected,
+    ...(req.projections?.assembly ? { assembly: req.projections.assembly } : {}),
+    ...(defaultViews && defaultViews.length > 0 ? { defaultViews: [...defaultViews] } : {}),
+  };
 }
 
 function partInput(pack: Pack, part: ResolvedPart, projected: ProjectedPart, sheetNumber: number, sheetCount: number): PartSheetInput {
@@ -173,6 +183,8 @@ function partInput(pack: Pack, part: ResolvedPart, projected: ProjectedPart, she
  * Bounded by count; a view set is tens of kilobytes.
  */
 const partViews = new LRUCache<string, ProjectedPart>({ max: 256 });
+/** The key of a part's projection: the part and the template's default views (which views get drawn). */
+const partKey = (part: ResolvedPart, views: readonly ViewName[] | undefined) => canonicalHash({ part, views: views ?? null });
 const assemblyViews = new LRUCache<string, ProjectedAssembly>({ max: 32 });
 const assemblyKey = (parts: ResolvedPart[]) => canonicalHash(parts);
 
@@ -185,7 +197,7 @@ export function clearProjectionCache(): void {
 /** Projects whatever of `parts` (and the assembly) this request has not projected yet. */
 async function project(pack: Pack, deps: ExportDeps, parts: ResolvedPart[], assembly: boolean): Promise<{ parts: ProjectedPart[]; assembly?: ProjectedAssembly }> {
   for (const p of parts) {
-    const hit = pack.projected.has(p.id) ? undefined : partViews.get(canonicalHash(p));
+    const hit = pack.projected.has(p.id) ? undefined : partViews.get(partKey(p, pack.defaultViews));
     if (hit) pack.projected.set(p.id, { ...hit, partId: p.id });
   }
   if (assembly && !pack.assembly) {
@@ -196,13 +208,15 @@ async function project(pack: Pack, deps: ExportDeps, parts: ResolvedPart[], asse
   const needAssembly = assembly && !pack.assembly;
   // One task per part (and one for the assembly), so a pool with several workers projects them at once.
   const opts = deps.signal ? { signal: deps.signal } : {};
-  const jobs: Promise<ProjectTaskOutput>[] = missing.map((part) => deps.kernel.run<ProjectTaskOutput>("project", { parts: [part] } satisfies ProjectTaskInput, opts));
+  const jobs: Promise<ProjectTaskOutput>[] = missing.map((part) =>
+    deps.kernel.run<ProjectTaskOutput>("project", { parts: [part], ...(pack.defaultViews ? { defaultViews: pack.defaultViews } : {}) } satisfies ProjectTaskInput, opts),
+  );
   if (needAssembly) jobs.push(deps.kernel.run<ProjectTaskOutput>("project", { parts: [], assembly: { parts: pack.parts } } satisfies ProjectTaskInput, opts));
   for (const out of await Promise.all(jobs)) {
     for (const p of out.parts) {
       pack.projected.set(p.partId, p);
       const part = missing.find((m) => m.id === p.partId);
-      if (part) partViews.set(canonicalHash(part), p);
+      if (part) partViews.set(partKey(part, pack.defaultViews), p);
     }
     if (out.assembly) {
       pack.assembly = out.assembly;

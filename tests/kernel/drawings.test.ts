@@ -25,7 +25,7 @@ import { engineFits, engineThreads } from "@/engine/drawing/lookups";
 import type { ProjectedPart, ProjectedView, ViewEdge } from "@/engine/drawing/projection";
 import type { ResolvedPart } from "@/engine/parts/features";
 import { viewFrame } from "@/engine/drawing/views";
-import { buildExport, type ExportFormat, type ExportRequest } from "@server/exporters/build-export";
+import { buildExport, clearProjectionCache, type ExportFormat, type ExportRequest } from "@server/exporters/build-export";
 import { shapesBox } from "@/engine/drawing/layout/shapes";
 import { createInProcessKernel, type KernelPool } from "@server/kernel";
 import type { ProjectTaskOutput } from "@server/kernel/tasks";
@@ -415,5 +415,32 @@ describe("one part sheet on its own", () => {
       fits: engineFits,
     });
     expect(res.unplaced).toHaveLength(0);
+  });
+});
+
+describe("the template's drawing.views (views for parts that do not list their own)", () => {
+  it("a part without its own list draws the template's views; a part with one keeps it; without the setting the default stays", async () => {
+    const projected: ProjectTaskOutput[] = [];
+    const recording: Pick<KernelPool, "run"> = {
+      async run<T>(task: string, input: unknown) {
+        const out = await memoKernel.run<T>(task, input);
+        if (task === "project") projected.push(out as ProjectTaskOutput);
+        return out;
+      },
+    };
+    const views = (id: string) => projected.flatMap((o) => o.parts).filter((p) => p.partId === id).map((p) => p.views.map((v) => v.name));
+    const chosen: ("front" | "top" | "left")[] = ["front", "left", "top"];
+    const template = { ...compiled.template, drawing: { ...compiled.template.drawing, views: chosen } };
+    // The cam lists no views of its own; the body lists front, top and right in the template.
+    const cam = await buildExport({ ...request({ format: "svg", part: "cam" }), template }, { kernel: recording, inWorker: false });
+    await buildExport({ ...request({ format: "svg", part: "body" }), template }, { kernel: recording, inWorker: false });
+    expect(views("cam")).toEqual([["front", "left", "top"]]);
+    expect(views("body")).toEqual([["front", "top", "right"]]);
+    // The sheet draws what was projected: the cam's end view seen from the left carries its bore callout.
+    expect(cam.body.toString("utf8")).toContain("Ø8 H7");
+    projected.length = 0;
+    clearProjectionCache();
+    await buildExport(request({ format: "svg", part: "cam" }), { kernel: recording, inWorker: false });
+    expect(views("cam")).toEqual([["front", "right"]]);
   });
 });

@@ -10,6 +10,8 @@ import { defineTask } from "./types";
 export interface ProjectTaskInput {
   /** Parts drawn one per sheet, each in its own frame with the views `viewsForPart` gives it. */
   parts: ResolvedPart[];
+  /** The template's `drawing.views`, for the parts that do not list their own. */
+  defaultViews?: ViewName[];
   /** Also project these parts together at their assembly placements (the assembly sheet). */
   assembly?: { parts: ResolvedPart[]; views?: ViewName[] };
 }
@@ -29,7 +31,7 @@ export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
   run(input, ctx) {
     const parts = input.parts.map((part) => {
       const built = ctx.buildPart(part);
-      return { partId: part.id, views: projectShape(ctx.oc, built.shape.wrapped, viewsForPart(part)) };
+      return { partId: part.id, views: projectShape(ctx.oc, built.shape.wrapped, viewsForPart(part, input.defaultViews)) };
     });
     if (!input.assembly || input.assembly.parts.length === 0) return { parts };
     // Front and side by side: the side view shows how the parts stack and hook; they fit a sheet at 1:1 more often than three views.

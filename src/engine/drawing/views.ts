@@ -82,13 +82,20 @@ export function baseKindOf(part: ResolvedPart): "block" | "turned" {
   return base.kind;
 }
 
+/** The views drawn when neither the part nor the template chooses: see {@link viewsForPart}. */
+export function defaultViewNames(kind: "block" | "turned"): ViewName[] {
+  return kind === "turned" ? ["front", "right"] : ["front", "top", "right"];
+}
+
 /**
- * The views drawn for a part: the template's choice, else front, top and right for a block (three views
- * fix every prismatic feature) and front and right (the end view) for a turned part.
+ * The views drawn for a part: the part's own choice (`parts[].drawing.views`), else the template's
+ * (`drawing.views`, "views for parts that do not list their own"), else front, top and right for a block
+ * (three views fix every prismatic feature) and front and right (the end view) for a turned part.
+ * The front view is always drawn (it is the principal view, ISO 5456-2 §5), first when it was left out.
  */
-export function viewsForPart(part: ResolvedPart): ViewFrame[] {
+export function viewsForPart(part: ResolvedPart, templateViews?: readonly ViewName[]): ViewFrame[] {
   const kind = baseKindOf(part);
-  const names: ViewName[] = part.drawing?.views ?? (kind === "turned" ? ["front", "right"] : ["front", "top", "right"]);
+  const names: readonly ViewName[] = part.drawing?.views ?? (templateViews && templateViews.length > 0 ? templateViews : defaultViewNames(kind));
   const unique = [...new Set(names)];
   if (!unique.includes("front")) unique.unshift("front");
   return unique.map((n) => viewFrame(kind, n));
