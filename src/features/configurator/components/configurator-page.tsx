@@ -40,8 +40,13 @@ export interface ConfiguratorPageProps {
 export function ConfiguratorPage(props: ConfiguratorPageProps) {
   const detail = useTemplateDetail(props.templateId);
   useEffect(() => {
-    if (detail.data) document.title = `${detail.data.name} · Jigwright`;
-  }, [detail.data]);
+    // Set while loading too, so the title announced on arrival names this page, not the one before.
+    document.title = detail.data
+      ? `${detail.data.name} · Jigwright`
+      : detail.isError
+        ? "Template not loaded · Jigwright"
+        : "Loading a template · Jigwright";
+  }, [detail.data, detail.isError]);
 
   if (detail.isPending) {
     return (
