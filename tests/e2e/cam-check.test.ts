@@ -103,4 +103,53 @@ describe("cam check in the browser, as a guest", () => {
     await page.locator('label:has(input[name="unit-system"][value="mm"])').click();
     expect(await page.getByLabel("Cam diameter").inputValue()).toBe("25.4");
   });
+
+  it("keeps the cam in the address: a reload and Back bring the same inputs and units", async () => {
+    const { page, screenshot } = browser;
+    await page.goto(`${app.baseUrl}/cam-check`);
+    await page.locator('[data-testid="cam-results"][data-status="current"]').waitFor();
+    await page.getByLabel("Cam diameter").fill("25.4");
+    await setEccentricity(page, 1.27, "2.54 mm");
+    await page.locator('label:has(input[name="unit-system"][value="inch"])').click();
+    // The address follows a moment after the last change: units and every input, as shown.
+    await page.waitForURL(
+      (url) => url.searchParams.get("units") === "in" && url.searchParams.get("eccentricity") === "0.05",
+    );
+    const address = new URL(page.url());
+    expect(address.searchParams.get("diameter")).toBe("1");
+
+    await page.reload();
+    await page.locator('[data-testid="cam-results"][data-status="current"]').waitFor();
+    expect(await page.getByLabel("Cam diameter").inputValue()).toBe("1");
+    expect(await page.getByLabel("Eccentricity").inputValue()).toBe("0.05");
+    expect(await page.locator('input[name="unit-system"][value="inch"]').isChecked()).toBe(true);
+    // Throw 2e = 0.1 in exactly (1 in = 25.4 mm), so the same cam was computed again.
+    await page.getByTestId("figure-throw").getByText("0.1 in", { exact: true }).waitFor();
+    await screenshot("cam-check-reloaded");
+
+    // Away to another page and Back: the same cam again.
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Templates" }).click();
+    await page.waitForURL("**/templates");
+    await page.goBack();
+    await page.waitForURL((url) => url.pathname === "/cam-check");
+    await page.locator('[data-testid="cam-results"][data-status="current"]').waitFor();
+    expect(await page.getByLabel("Eccentricity").inputValue()).toBe("0.05");
+    expect(new URL(page.url()).search).toBe(address.search);
+  });
+
+  it("opens a link with a bad value on the starting value, saying which and why", async () => {
+    const { page } = browser;
+    await page.goto(`${app.baseUrl}/cam-check?units=mm&diameter=24&eccentricity=-1&muContact=lots`);
+    await page.locator('[data-testid="cam-results"][data-status="current"]').waitFor();
+    const note = page.getByRole("status").filter({ hasText: "Some values in the link could not be used" });
+    expect(await note.textContent()).toContain(
+      "Eccentricity: -1 from the link cannot be used (it must be more than 0 mm)",
+    );
+    expect(await note.textContent()).toContain(
+      "Friction at the work face: “lots” in the link is not a number",
+    );
+    // The starting cam's values (src/features/cam-check/model/fields.ts) stand in for them.
+    expect(await page.getByLabel("Eccentricity").inputValue()).toBe("1.2");
+    expect(await page.getByLabel("Friction at the work face").inputValue()).toBe("0.1");
+  });
 });

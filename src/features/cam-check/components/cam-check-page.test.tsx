@@ -1,6 +1,7 @@
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, configure, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
+import { act, cleanup, configure, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
+import { createMemoryRouter, RouterProvider } from "react-router";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { eccentricCamCalculator } from "@/engine/calculators/eccentric-cam";
 import { CalculatorInputError } from "@/engine/calculators/types";
@@ -42,13 +43,18 @@ function calculatorServer() {
   return bodies;
 }
 
-function renderPage() {
+/** The page at `address` (its query holds the inputs); returns the router to read the address back. */
+function renderPage(address = "/cam-check") {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const router = createMemoryRouter([{ path: "/cam-check", Component: CamCheckPage }], {
+    initialEntries: [address],
+  });
   render(
     <QueryClientProvider client={queryClient}>
-      <CamCheckPage />
+      <RouterProvider router={router} />
     </QueryClientProvider>,
   );
+  return router;
 }
 
 const verdict = () => screen.findByTestId("lock-verdict");
@@ -125,5 +131,56 @@ describe("cam check page", { timeout: 20_000 }, () => {
     // Whatever the shown unit, the calculator always gets millimetres.
     const last = bodies.at(-1) as { diameter: number };
     expect(last.diameter).toBeCloseTo(24, 3);
+  });
+
+  it("opens with the inputs and units the address holds", async () => {
+    calculatorServer();
+    renderPage("/cam-check?units=in&diameter=1&eccentricity=0.05");
+    await verdict();
+    expect((field("Cam diameter") as HTMLInputElement).value).toBe("1");
+    expect((field("Eccentricity") as HTMLInputElement).value).toBe("0.05");
+    expect((screen.getByRole("radio", { name: /inch/ }) as HTMLInputElement).checked).toBe(true);
+    // Throw 2e = 2 × 0.05 in = 0.1 in (1 in = 25.4 mm exactly).
+    await waitFor(() => expect(screen.getByTestId("figure-throw").textContent).toBe("0.1 in"));
+    expect(screen.queryByText("Some values in the link could not be used")).toBeNull();
+  });
+
+  it("falls back to the starting value, with a note, for what in the address cannot be used", async () => {
+    calculatorServer();
+    renderPage("/cam-check?units=cubits&diameter=abc&muContact=1.5&eccentricity=2");
+    await verdict();
+    const note = screen.getByText("Some values in the link could not be used").parentElement!;
+    expect(note.textContent).toContain("The link's units “cubits” are not mm or in; the check uses mm.");
+    expect(note.textContent).toContain(
+      "Cam diameter: “abc” in the link is not a number; the starting value 24 mm is used.",
+    );
+    expect(note.textContent).toContain("Friction at the work face: 1.5 from the link cannot be used");
+    expect((field("Cam diameter") as HTMLInputElement).value).toBe("24");
+    expect((field("Friction at the work face") as HTMLInputElement).value).toBe("0.1");
+    // What did fit is used.
+    expect((field("Eccentricity") as HTMLInputElement).value).toBe("2");
+    await userEvent.click(within(note).getByRole("button", { name: "Dismiss" }));
+    expect(screen.queryByText("Some values in the link could not be used")).toBeNull();
+  });
+
+  it("writes a whole cam to the address, and reads back a link to another cam", async () => {
+    calculatorServer();
+    const router = renderPage();
+    await verdict();
+    retype("Eccentricity", "3");
+    await waitFor(() =>
+      expect(new URLSearchParams(router.state.location.search).get("eccentricity")).toBe("3"),
+    );
+    const written = new URLSearchParams(router.state.location.search);
+    expect(written.get("units")).toBe("mm");
+    expect(written.get("diameter")).toBe("24");
+    // A half-typed value does not reach the address: it keeps the last whole cam.
+    retype("Cam diameter", "");
+    await new Promise((r) => setTimeout(r, 400)); // past the address's pause
+    expect(new URLSearchParams(router.state.location.search).get("diameter")).toBe("24");
+
+    await act(() => router.navigate("/cam-check?units=mm&diameter=30&eccentricity=1.5"));
+    await waitFor(() => expect((field("Cam diameter") as HTMLInputElement).value).toBe("30"));
+    expect((field("Eccentricity") as HTMLInputElement).value).toBe("1.5");
   });
 });

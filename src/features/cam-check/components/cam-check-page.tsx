@@ -1,5 +1,6 @@
 import { Page } from "@/components/layouts/page";
 import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
 import { useCamCheck } from "../hooks/use-cam-check";
 import { CamInputs } from "./cam-inputs";
 import { CamResults } from "./cam-results";
@@ -8,7 +9,7 @@ import { UnitSwitch } from "./unit-switch";
 
 /** The cam check: a circular eccentric cam's lock, force and curve, for anyone, no sign-in. */
 export function CamCheckPage() {
-  const { form, fieldErrors, status, shown } = useCamCheck();
+  const { form, fieldErrors, status, shown, urlNotes, dismissUrlNotes } = useCamCheck();
   // The last good result stays on screen, a little faded, while the inputs do not match it.
   const stale = status.kind === "input-problem" || status.kind === "server-problem";
   return (
@@ -24,6 +25,18 @@ export function CamCheckPage() {
             </h2>
             <UnitSwitch value={form.system} onChange={form.setSystem} />
           </div>
+          {urlNotes.length > 0 ? (
+            <Notice tone="caution" title="Some values in the link could not be used">
+              <ul className="list-disc space-y-1 pl-5">
+                {urlNotes.map((note) => (
+                  <li key={note}>{note}</li>
+                ))}
+              </ul>
+              <Button variant="quiet" className="mt-2" onClick={dismissUrlNotes}>
+                Dismiss
+              </Button>
+            </Notice>
+          ) : null}
           <form
             onSubmit={(e) => e.preventDefault()}
             noValidate

@@ -1,11 +1,14 @@
 import { useEffect, useMemo, useState } from "react";
+import { useSearchParams } from "react-router";
 import type { EccentricCamInput } from "@/engine/calculators/eccentric-cam/schema";
 import { ApiError } from "@/lib/api-error";
 import { useDebouncedValue } from "@/lib/use-debounced-value";
+import { useSearchState } from "@/lib/use-search-state";
 import type { CamResult } from "../api/cam-result-schema";
 import { useCamResult } from "../api/evaluate-cam";
 import { camFields, type CamFieldKey } from "../model/fields";
 import type { CamFieldErrors } from "../model/parse-inputs";
+import { readCamUrl, writeCamUrl } from "../model/url-state";
 import { useCamForm } from "./use-cam-form";
 
 export const camDebounceMs = 300;
@@ -30,8 +33,18 @@ export type CamStatus =
  * which stays on screen while the next is computed or while the input has a problem.
  */
 export function useCamCheck() {
-  const form = useCamForm();
+  const [searchParams] = useSearchParams();
+  const [fromUrl] = useState(() => readCamUrl(searchParams));
+  const form = useCamForm(fromUrl);
+  /** What the address held that could not be used (shown until dismissed or the address changes). */
+  const [urlNotes, setUrlNotes] = useState<string[]>(fromUrl.notes);
   const input = form.parsed.input;
+  // The address follows every whole cam; a link to another cam opened on this page is read back in.
+  useSearchState(input ? writeCamUrl(form.system, form.texts).toString() : null, (params) => {
+    const next = readCamUrl(params, form.system);
+    form.load(next.system, next.texts);
+    setUrlNotes(next.notes);
+  });
   // Debounce on the text of the input so an equal object does not restart the timer.
   const inputKey = input ? JSON.stringify(input) : null;
   const settledKey = useDebouncedValue(inputKey, camDebounceMs);
@@ -71,5 +84,5 @@ export function useCamCheck() {
   else if (inputKey !== settledKey || query.isFetching) status = { kind: "updating" };
   else status = { kind: "current" };
 
-  return { form, fieldErrors, status, shown: lastGood };
+  return { form, fieldErrors, status, shown: lastGood, urlNotes, dismissUrlNotes: () => setUrlNotes([]) };
 }

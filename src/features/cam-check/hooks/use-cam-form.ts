@@ -14,13 +14,20 @@ interface FormState {
   before: Partial<Record<UnitSystem, CamTexts>>;
 }
 
-/** The cam check's inputs as typed, the unit system, and the calculator input they make. */
-export function useCamForm(initialSystem: UnitSystem = "mm") {
+/**
+ * The cam check's inputs as typed, the unit system, and the calculator input they make. `initial` seeds
+ * the first render (the address's inputs); `load` replaces everything (an address changed from outside).
+ */
+export function useCamForm(initial?: { system: UnitSystem; texts: CamTexts }) {
   const [state, setState] = useState<FormState>(() => ({
-    system: initialSystem,
-    texts: defaultTexts(initialSystem),
+    system: initial?.system ?? "mm",
+    texts: initial?.texts ?? defaultTexts(initial?.system ?? "mm"),
     before: {},
   }));
+
+  const load = useCallback((system: UnitSystem, texts: CamTexts) => {
+    setState({ system, texts, before: {} });
+  }, []);
 
   const setText = useCallback((key: CamFieldKey, text: string) => {
     setState((s) => ({ ...s, texts: { ...s.texts, [key]: text }, before: {} }));
@@ -54,5 +61,5 @@ export function useCamForm(initialSystem: UnitSystem = "mm") {
   );
 
   const parsed = useMemo(() => parseCamTexts(state.texts, state.system), [state.texts, state.system]);
-  return { system: state.system, texts: state.texts, parsed, setText, setBaseValue, setSystem, reset };
+  return { system: state.system, texts: state.texts, parsed, setText, setBaseValue, setSystem, reset, load };
 }

@@ -1,8 +1,9 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useMemo, useRef, useState } from "react";
 import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { useSearchParams } from "react-router";
 import type { ParameterValue } from "@/engine/parameters";
 import type { LengthUnit } from "@/engine/units";
+import { useSearchState } from "@/lib/use-search-state";
 import type { TemplateDetail } from "../api/template-detail";
 import { buildFormSchema, numericProblem } from "../model/form-schema";
 import {
@@ -24,12 +25,12 @@ import { readUrlConfiguration, writeUrlConfiguration } from "../model/url-state"
  */
 export function useConfiguration(template: TemplateDetail) {
   const specs = template.parameters;
-  const [searchParams, setSearchParams] = useSearchParams();
+  const [searchParams] = useSearchParams();
   const initial = useMemo(() => {
     const url = readUrlConfiguration(searchParams, specs);
     const units = url.units ?? template.units;
     return { units, state: formStateFromTemplateValues(specs, url.values, template.units, units) };
-    // Only the first render's address seeds the form; later changes are handled below.
+    // Only the first render's address seeds the form; later changes come through useSearchState below.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [template]);
 
@@ -120,34 +121,17 @@ export function useConfiguration(template: TemplateDetail) {
     [initial, form, specs, units, applyState],
   );
 
-  // The address bar follows every valid configuration (replace, so Back leaves the page instead of undoing
-  // typing). Addresses this hook wrote are remembered: the router applies a write a moment later, and that
-  // arrival must not be mistaken for a link from outside.
-  const written = useRef<string[]>([searchParams.toString()]);
+  // The address bar follows every valid configuration; an address changed from outside (a link to
+  // another configuration of this template) is read back in.
   const wanted = templateParameters
     ? writeUrlConfiguration(specs, templateParameters, units).toString()
     : null;
-  useEffect(() => {
-    if (wanted === null || wanted === searchParams.toString()) return;
-    const timer = setTimeout(() => {
-      written.current = [...written.current.slice(-19), wanted];
-      setSearchParams(new URLSearchParams(wanted), { replace: true, preventScrollReset: true });
-    }, 250);
-    return () => clearTimeout(timer);
-  }, [wanted, searchParams, setSearchParams]);
-
-  // An address changed from outside (a link to another configuration of this template) is read back in.
-  const searchText = searchParams.toString();
-  useEffect(() => {
-    if (written.current.includes(searchText)) return;
-    written.current = [...written.current.slice(-19), searchText];
-    const url = readUrlConfiguration(new URLSearchParams(searchText), specs);
+  useSearchState(wanted, (params) => {
+    const url = readUrlConfiguration(params, specs);
     const nextUnits = url.units ?? units;
     setUnits(nextUnits);
     applyState(formStateFromTemplateValues(specs, url.values, template.units, nextUnits));
-    // Only a change of the address should trigger this.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [searchText]);
+  });
 
   /** Puts the server's per-parameter problems (`parameters.<key>`) on their fields. */
   const showServerProblems = useCallback(

@@ -5,6 +5,7 @@
  */
 import type { ParameterValue } from "@/engine/parameters";
 import type { LengthUnit } from "@/engine/units";
+import { readUnitsParam } from "@/lib/use-search-state";
 import { isNumericKind, type ParameterSpecView } from "./parameter-spec";
 
 export interface UrlConfiguration {
@@ -17,8 +18,7 @@ export function readUrlConfiguration(
   params: URLSearchParams,
   specs: readonly ParameterSpecView[],
 ): UrlConfiguration {
-  const unitsText = params.get("units");
-  const units: LengthUnit | null = unitsText === "mm" || unitsText === "in" ? unitsText : null;
+  const units: LengthUnit | null = readUnitsParam(params);
   const values: Record<string, ParameterValue> = {};
   for (const spec of specs) {
     const text = params.get(spec.key);
