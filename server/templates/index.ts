@@ -1,1 +1,2 @@
 export { builtInTemplates, loadTemplateStore, defaultTemplatesDir, CatalogueLoadError, type TemplateStore } from "./catalogue";
+export { evaluateCached, evaluateForRequest, evaluationKey, requireBuildable, type RefusalMessages } from "./evaluation";

@@ -24,7 +24,7 @@ const rectangle: Calculator = {
 };
 const deps = { getCalculator: (k: string) => (k === rectangle.kind ? rectangle : undefined) };
 
-function template(units: "mm" | "in" = "mm", extra: Record<string, unknown> = {}) {
+function template(units: "mm" | "in" = "mm", extra: Record<string, unknown> = {}, lookup = deps) {
   const f = units === "mm" ? 1 : 1 / 25.4;
   return loadAndCompileTemplate(
     stringify({
@@ -75,7 +75,7 @@ function template(units: "mm" | "in" = "mm", extra: Record<string, unknown> = {}
       assembly: { fixtures: [{ id: "jaw", label: "Jaw", position: { x: 0, y: "-height", z: 0 }, size: { x: "width", y: "height", z: 10 * f } }] },
       ...extra,
     }),
-    deps,
+    lookup,
   );
 }
 
@@ -180,5 +180,46 @@ describe("evaluateTemplate", () => {
 
   it("keeps the CLI contract: exactly seven keys", () => {
     expect(Object.keys(evaluationContract(evaluateTemplate(mm, {})))).toEqual(["template", "units", "parameters", "derived", "analyses", "checks", "ok"]);
+  });
+});
+
+describe("recent analysis results", () => {
+  /** The rectangle calculator, counting how often it really computes. */
+  function counted() {
+    const calls = { n: 0 };
+    const calculator: Calculator = { ...rectangle, compute: (input: never) => ((calls.n += 1), rectangle.compute(input)) };
+    return { calls, compiled: template("mm", {}, { getCalculator: (k: string) => (k === rectangle.kind ? calculator : undefined) }) };
+  }
+
+  it("computes an analysis once for the same inputs, and again when an input changes", () => {
+    const { calls, compiled } = counted();
+    const first = evaluateTemplate(compiled, {});
+    expect(calls.n).toBe(1);
+    // holeDiameter is no input of the rectangle: the remembered result is used.
+    const second = evaluateTemplate(compiled, { parameters: { holeDiameter: 8 } });
+    expect(calls.n).toBe(1);
+    expect(second.analyses.rect).toBe(first.analyses.rect);
+    const wider = evaluateTemplate(compiled, { parameters: { width: 50 } });
+    expect(calls.n).toBe(2);
+    expect(wider.analyses.rect).toMatchObject({ areaMm2: 1000, perimeterMm: 140 });
+    expect(Object.isFrozen(wider.analyses.rect)).toBe(true);
+  });
+
+  it("never remembers a refusal: a refused input is refused every time", () => {
+    const { calls, compiled } = counted();
+    for (let i = 0; i < 2; i++) {
+      const e = evaluateTemplate(compiled, { parameters: { width: 20, height: 20 } });
+      expect(e.analyses.rect).toEqual({ error: "A square is not allowed here." });
+    }
+    expect(calls.n).toBe(2);
+  });
+
+  it("keeps a bounded number of results and still answers right after older ones are dropped", () => {
+    const { calls, compiled } = counted();
+    for (let w = 21; w <= 60; w++) evaluateTemplate(compiled, { parameters: { width: w } });
+    expect(compiled.analyses[0]!.recent.size).toBeLessThanOrEqual(16);
+    const e = evaluateTemplate(compiled, { parameters: { width: 21 } });
+    expect(e.analyses.rect).toMatchObject({ areaMm2: 420 });
+    expect(calls.n).toBe(41);
   });
 });

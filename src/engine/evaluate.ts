@@ -25,7 +25,7 @@ import type { Point3, ResolvedPart } from "./parts/features";
 import type { GeometryIssue } from "./parts/issues";
 import { resolveParts } from "./parts/resolve";
 import { DROPPED, resolveValue, scaleLengths } from "./parts/template-values";
-import { compileTemplate, type CompiledTemplate } from "./template/compile";
+import { compileTemplate, rememberResult, type CompiledTemplate } from "./template/compile";
 import type { Template, UnitSystem } from "./template/schema";
 import { convertLength, formatLength } from "./units";
 
@@ -167,12 +167,17 @@ export function evaluateTemplate(template: Template | CompiledTemplate, input: E
       }
       const args: Record<string, unknown> = {};
       for (const inp of a.inputs) args[inp.key] = "literal" in inp ? inp.literal : inp.expr.evaluate(scope);
-      const parsed = a.calculator.inputSchema.safeParse(args);
-      if (!parsed.success) {
-        const why = parsed.error.issues.map((i) => `${i.path.join(".") || "input"}: ${i.message}`).join("; ");
-        throw new Error(why);
+      // The inputs in their declared order identify the result; a repeat skips parsing and computing.
+      const key = JSON.stringify(args);
+      let result = a.recent.get(key);
+      if (!result) {
+        const parsed = a.calculator.inputSchema.safeParse(args);
+        if (!parsed.success) {
+          const why = parsed.error.issues.map((i) => `${i.path.join(".") || "input"}: ${i.message}`).join("; ");
+          throw new Error(why);
+        }
+        result = rememberResult(a, key, plain(a.calculator.compute(parsed.data)));
       }
-      const result = plain(a.calculator.compute(parsed.data));
       scope[a.spec.id] = result;
       analyses[a.spec.id] = result;
     } catch (err) {

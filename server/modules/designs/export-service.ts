@@ -4,7 +4,7 @@
  * the person works in. Only the catalogue's current version can be drawn, so a design pinned to an older
  * version is refused (409) with what to do, rather than drawn on a template it was not saved against.
  */
-import { evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type Evaluation } from "@/engine";
+import type { CompiledTemplate, Evaluation } from "@/engine";
 import type { DesignExportQuery } from "@/shared/designs";
 import { buildExport, ExportInputError, type ExportFile } from "@server/exporters/build-export";
 import type { KernelPool } from "@server/kernel";
@@ -14,7 +14,7 @@ import { kernelErrorToHttp } from "@server/modules/model";
 import type { OwnedRepository } from "@server/modules/profiles/repository";
 import type { MachineRecord } from "@server/db/models/machine";
 import type { MachineFields } from "@/shared/profiles";
-import type { TemplateStore } from "@server/templates";
+import { evaluateForRequest, requireBuildable, type TemplateStore } from "@server/templates";
 import type { DesignRepository } from "./repository";
 import { parametersOf } from "./serialize";
 
@@ -37,31 +37,11 @@ function evaluate(
   compiled: CompiledTemplate,
   parameters: Record<string, number | string | boolean>,
 ): Evaluation {
-  let evaluation: Evaluation;
-  try {
-    // No `units`: the stored values are in the template's own units.
-    evaluation = evaluateTemplate(compiled, { parameters });
-  } catch (err) {
-    if (err instanceof ParameterResolutionError) {
-      throw badRequest(
-        "The saved values no longer suit this template; open the design in the configurator and fix them.",
-        err.issues.map((i) => ({ path: i.path, message: i.message })),
-      );
-    }
-    throw err;
-  }
-  if (!evaluation.buildable) {
-    const issues = evaluation.geometryIssues.filter((i) => i.blocking);
-    throw badRequest(
-      issues.length === 1
-        ? issues[0]!.message
-        : "These values give parts that cannot be made; see the details.",
-      issues.map((i) => ({
-        path: `parts.${i.partId}${i.featureIndex !== undefined ? `.features.${i.featureIndex}` : ""}`,
-        message: i.message,
-      })),
-    );
-  }
+  // No `units`: the stored values are in the template's own units.
+  const evaluation = evaluateForRequest(compiled, { parameters }, {
+    always: "The saved values no longer suit this template; open the design in the configurator and fix them.",
+  });
+  requireBuildable(evaluation, "These values give parts that cannot be made; see the details.");
   try {
     for (const part of evaluation.parts) validatePartForKernel(part);
   } catch (err) {

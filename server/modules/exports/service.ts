@@ -3,7 +3,8 @@
  * build the file with the pack service (server/exporters/build-export.ts), which other routes (saved
  * designs) call the same way.
  */
-import { evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type Evaluation } from "@/engine";
+import type { CompiledTemplate, Evaluation } from "@/engine";
+import { evaluateForRequest, requireBuildable } from "@server/templates";
 import type { KernelPool } from "@server/kernel";
 import { validatePartForKernel } from "@server/kernel/validate";
 import { buildExport, ExportInputError, type ExportFile, type ExportFormat } from "@server/exporters/build-export";
@@ -36,22 +37,8 @@ export function exportService(deps: ExportServiceDeps) {
   };
 
   function evaluate(compiled: CompiledTemplate, req: TemplateExportRequest): Evaluation {
-    let evaluation: Evaluation;
-    try {
-      evaluation = evaluateTemplate(compiled, { parameters: req.parameters, ...(req.units ? { units: req.units } : {}) });
-    } catch (err) {
-      if (err instanceof ParameterResolutionError) {
-        throw badRequest(err.issues.length === 1 ? err.issues[0]!.message : "Some parameters are not acceptable.", err.issues.map((i) => ({ path: i.path, message: i.message })));
-      }
-      throw err;
-    }
-    if (!evaluation.buildable) {
-      const issues = evaluation.geometryIssues.filter((i) => i.blocking);
-      throw badRequest(
-        issues.length === 1 ? issues[0]!.message : "These parameters give parts that cannot be made; see the details.",
-        issues.map((i) => ({ path: `parts.${i.partId}${i.featureIndex !== undefined ? `.features.${i.featureIndex}` : ""}`, message: i.message })),
-      );
-    }
+    const evaluation = evaluateForRequest(compiled, { parameters: req.parameters, ...(req.units ? { units: req.units } : {}) });
+    requireBuildable(evaluation);
     try {
       for (const part of evaluation.parts) validatePartForKernel(part);
     } catch (err) {

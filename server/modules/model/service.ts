@@ -5,14 +5,15 @@
  * {@link modelCacheKey} (template id, version, parameters in mm), and identical requests in flight share
  * one kernel job. The web thread never holds the meshes as JavaScript strings.
  */
-import { evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type Evaluation } from "@/engine";
+import type { CompiledTemplate, Evaluation } from "@/engine";
+import { evaluateForRequest, requireBuildable } from "@server/templates";
 import type { ResolvedPart } from "@/engine/parts/features";
 import type { EvaluateRequest } from "@/shared/templates";
 import type { KernelPool } from "@server/kernel";
 import { createResultCache, modelCacheKey } from "@server/kernel/model-cache";
 import type { ModelJsonTaskOutput } from "@server/kernel/tasks";
 import { validatePartForKernel } from "@server/kernel/validate";
-import { badRequest, HttpError, notFound } from "@server/lib/errors";
+import { HttpError, notFound } from "@server/lib/errors";
 import type { TemplateStore } from "@server/templates";
 import { kernelErrorToHttp } from "./kernel-http";
 
@@ -85,22 +86,8 @@ export function modelService(deps: ModelServiceDeps) {
    */
   function prepare(id: string, body: EvaluateRequest, { kernelGuard = true } = {}): PreparedModel {
     const compiled = find(id);
-    let evaluation: Evaluation;
-    try {
-      evaluation = evaluateTemplate(compiled, { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
-    } catch (err) {
-      if (err instanceof ParameterResolutionError) {
-        throw badRequest(err.issues.length === 1 ? err.issues[0]!.message : "Some parameters are not acceptable.", err.issues.map((i) => ({ path: i.path, message: i.message })));
-      }
-      throw err;
-    }
-    if (!evaluation.buildable) {
-      const issues = evaluation.geometryIssues.filter((i) => i.blocking);
-      throw badRequest(
-        issues.length === 1 ? issues[0]!.message : "These parameters give parts that cannot be made; see the details.",
-        issues.map((i) => ({ path: `parts.${i.partId}${i.featureIndex !== undefined ? `.features.${i.featureIndex}` : ""}`, message: i.message })),
-      );
-    }
+    const evaluation = evaluateForRequest(compiled, { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
+    requireBuildable(evaluation);
     if (kernelGuard) guard(evaluation.parts);
     const t = compiled.template;
     return { compiled, evaluation, parts: evaluation.parts, cacheKey: modelCacheKey(t.id, t.version, evaluation.parametersMm) };

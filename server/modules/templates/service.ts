@@ -2,12 +2,12 @@
  * The template catalogue's business logic: list, describe for a form, evaluate. Plain arguments in, plain
  * data out; failures are typed HttpErrors (404 unknown template, 400 with one detail per bad parameter).
  */
-import { choiceValues, evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type Evaluation, type ParameterSpec, type UnitSystem } from "@/engine";
+import { choiceValues, type CompiledTemplate, type Evaluation, type ParameterSpec, type UnitSystem } from "@/engine";
 import { getMaterial, isMaterialKey } from "@/engine/materials";
 import { convertLength } from "@/engine/units";
 import type { EvaluateRequest } from "@/shared/templates";
-import { badRequest, notFound } from "@server/lib/errors";
-import type { TemplateStore } from "@server/templates";
+import { notFound } from "@server/lib/errors";
+import { evaluateForRequest, type TemplateStore } from "@server/templates";
 
 export interface TemplateSummaryDto {
   id: string;
@@ -126,19 +126,8 @@ export function templatesService(store: TemplateStore) {
 
     /** Evaluates with the user's parameters; 400 with one detail per bad parameter. */
     evaluate(id: string, body: EvaluateRequest): EvaluationDto {
-      const compiled = find(id);
-      try {
-        const { parts: _parts, geometryIssues: _issues, ...rest } = evaluateTemplate(compiled, { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
-        return rest;
-      } catch (err) {
-        if (err instanceof ParameterResolutionError) {
-          throw badRequest(
-            err.issues.length === 1 ? err.issues[0]!.message : "Some parameters are not acceptable.",
-            err.issues.map((i) => ({ path: i.path, message: i.message })),
-          );
-        }
-        throw err;
-      }
+      const { parts: _parts, geometryIssues: _issues, ...rest } = evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
+      return rest;
     },
   };
 }

@@ -30,6 +30,33 @@ export interface CompiledAnalysis {
   when?: CompiledExpression | boolean;
   /** The analysis's `parameters`, or the parameters its inputs depend on. */
   parameters: string[];
+  /**
+   * Recent results by their inputs (see {@link rememberResult}): when a user changes one value, most
+   * analyses get the same inputs again (a thread, a fit, a cam whose sizes did not change).
+   */
+  recent: Map<string, Readonly<Record<string, unknown>>>;
+}
+
+/** How many recent results each analysis keeps. */
+const RECENT_RESULTS = 16;
+
+/**
+ * Keeps a calculator result for its inputs, oldest out first. Calculators are pure, so the same inputs
+ * give the same result; the result is frozen because later evaluations share it.
+ */
+export function rememberResult(analysis: CompiledAnalysis, key: string, result: Record<string, unknown>): Readonly<Record<string, unknown>> {
+  const frozen = deepFreeze(result);
+  if (analysis.recent.size >= RECENT_RESULTS) analysis.recent.delete(analysis.recent.keys().next().value!);
+  analysis.recent.set(key, frozen);
+  return frozen;
+}
+
+function deepFreeze<T>(value: T): T {
+  if (value !== null && typeof value === "object" && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
 }
 
 export interface CompiledCheck {
@@ -197,7 +224,7 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
     const inputParams = paramsOf(inputs.flatMap((i) => ("expr" in i ? i.expr.names : [])));
     dependsOn.set(spec.id, inputParams);
     const parameters = spec.parameters ? [...spec.parameters] : [...inputParams];
-    if (calculator) analyses.push({ spec, calculator, inputs, parameters, ...(when !== undefined ? { when } : {}) });
+    if (calculator) analyses.push({ spec, calculator, inputs, parameters, recent: new Map(), ...(when !== undefined ? { when } : {}) });
   });
 
   // Checks, parts and fixtures see everything.
