@@ -57,6 +57,24 @@ export function meshShape(kernel: LoadedKernel, shape: Shape3D, options: MeshOpt
 }
 
 /**
+ * Only the triangles (positions and indices, no normals or edge lines) of the exact solid: for work that
+ * needs the surface but never shows it (which part the viewer sees where on an assembly drawing).
+ */
+export function meshTriangles(kernel: LoadedKernel, shape: Shape3D, options: MeshOptions): Pick<MeshData, "positions" | "indices"> {
+  const { oc } = kernel;
+  const raw = oc.ReplicadMeshExtractor.extract(shape.wrapped, options.toleranceMm, options.angularTolerance, false);
+  try {
+    const buffer = (oc.wasmMemory as WebAssembly.Memory).buffer;
+    return {
+      positions: copyOut(Float32Array, buffer, raw.getVerticesPtr(), raw.getVerticesSize()),
+      indices: copyOut(Uint32Array, buffer, raw.getTrianglesPtr(), raw.getTrianglesSize()),
+    };
+  } finally {
+    raw.delete();
+  }
+}
+
+/**
  * replicad's edge extractor returns each edge as consecutive segment pairs already (p0 p1 p1 p2 …); keep
  * the array as is when its length is a multiple of 6, which is the line-segment layout three.js expects.
  */

@@ -18,7 +18,7 @@ import DxfParser from "dxf-parser";
 import JSZip from "jszip";
 import { getDocument, OPS } from "pdfjs-dist/legacy/build/pdf.mjs";
 import { evaluateTemplate, type CompiledTemplate, type Evaluation } from "@/engine";
-import { buildPartSheet, layoutAtScale } from "@/engine/drawing/partSheet";
+import { buildPartSheet, layoutAtScale, type SheetCommon } from "@/engine/drawing/partSheet";
 import { annotatePart, baseBox } from "@/engine/drawing/annotations";
 import { formatter } from "@/engine/drawing/format";
 import { engineFits, engineThreads } from "@/engine/drawing/lookups";
@@ -27,6 +27,9 @@ import type { ResolvedPart } from "@/engine/parts/features";
 import { viewFrame } from "@/engine/drawing/views";
 import { buildExport, clearProjectionCache, type ExportFormat, type ExportRequest } from "@server/exporters/build-export";
 import { shapesBox } from "@/engine/drawing/layout/shapes";
+import { segmentsIntersect } from "@/engine/drawing/layout/balloons";
+import { balloonView, buildAssemblySheet } from "@/engine/drawing/assemblySheet";
+import type { SheetShape } from "@/engine/drawing/model";
 import { createInProcessKernel, type KernelPool } from "@server/kernel";
 import type { ProjectTaskOutput } from "@server/kernel/tasks";
 import { builtInTemplates } from "@server/templates";
@@ -44,6 +47,18 @@ const memoKernel: Pick<KernelPool, "run"> = {
     return projections.get(key) as Promise<T>;
   },
 };
+
+/** The sheet fields every hand-built sheet below shares. */
+const sheetCommon = {
+  units: "mm",
+  projection: "first",
+  generalTolerance: "m",
+  template: { id: "cam-vise-stop", name: "Cam-lock vise stop", version: "1.0.0" },
+  owner: "Jigwright",
+  drawnBy: "A. Fitter",
+  date: "2026-12-01",
+  failingChecks: [],
+} satisfies SheetCommon;
 
 function request(over: Partial<ExportRequest> & { format: ExportFormat }): ExportRequest {
   return { template: compiled.template, evaluation: ev, units: "mm", projection: "first", drawnBy: "A. Fitter", date: "2026-12-01", ...over };
@@ -403,14 +418,7 @@ describe("one part sheet on its own", () => {
     const res = buildPartSheet({
       part,
       projected: out.parts[0]!,
-      units: "mm",
-      projection: "first",
-      generalTolerance: "m",
-      template: { id: "cam-vise-stop", name: "Cam-lock vise stop", version: "1.0.0" },
-      owner: "Jigwright",
-      drawnBy: "A. Fitter",
-      date: "2026-12-01",
-      failingChecks: [],
+      ...sheetCommon,
       threads: engineThreads,
       fits: engineFits,
     });
@@ -444,3 +452,48 @@ describe("the template's drawing.views (views for parts that do not list their o
     expect(views("cam")).toEqual([["front", "right"]]);
   });
 });
+
+describe("assembly sheet balloons (ISO 6433)", () => {
+  it("vise stop: a balloon per item, no two leaders cross, none runs through another balloon, each dot on a part its view shows", async () => {
+    const out = await memoKernel.run<ProjectTaskOutput>("project", { parts: [], assembly: { parts: ev.parts } });
+    const projected = out.assembly!;
+    const sheet = buildAssemblySheet({
+      ...sheetCommon,
+      parts: ev.parts,
+      projected,
+      materialNames: {},
+    });
+    const balloons = sheet.shapes.filter((s): s is Extract<SheetShape, { type: "circle" }> => s.type === "circle" && s.layer === "dimension" && Math.abs(s.radius - 4.5) < 1e-9);
+    const labels = sheet.shapes.filter((s) => s.type === "text" && s.role === "label" && s.layer === "dimension").map((s) => (s.type === "text" ? s.text : ""));
+    expect(labels.sort((a, b) => Number(a) - Number(b))).toEqual(ev.parts.map((_, i) => String(i + 1)));
+    expect(balloons).toHaveLength(ev.parts.length);
+    // A leader starts on a balloon's rim.
+    const leaders = sheet.shapes.filter(
+      (s): s is Extract<SheetShape, { type: "line" }> =>
+        s.type === "line" && s.layer === "dimension" && balloons.some((b) => Math.abs(Math.hypot(s.from.x - b.centre.x, s.from.y - b.centre.y) - 4.5) < 1e-6),
+    );
+    expect(leaders).toHaveLength(ev.parts.length);
+    for (let i = 0; i < leaders.length; i++)
+      for (let j = i + 1; j < leaders.length; j++) expect(segmentsIntersect(leaders[i]!.from, leaders[i]!.to, leaders[j]!.from, leaders[j]!.to), `leaders ${i} and ${j}`).toBe(false);
+    for (const l of leaders) {
+      const own = balloons.find((b) => Math.abs(Math.hypot(l.from.x - b.centre.x, l.from.y - b.centre.y) - 4.5) < 1e-6)!;
+      for (const b of balloons) if (b !== own) expect(distanceToSegment(l.from, l.to, b.centre)).toBeGreaterThan(4.5);
+    }
+    // Each part is seen (a visible anchor, clear of its patch's edges) in the view its balloon is in.
+    for (const p of ev.parts) {
+      const anchor = projected.anchors.find((a) => a.partId === p.id && a.view === balloonView(projected, p.id))!;
+      expect(anchor.visibleShare, p.id).toBeGreaterThan(0);
+      expect(anchor.clearanceMm, p.id).toBeGreaterThan(0.2);
+    }
+    // Two parts never share a dot.
+    const dots = leaders.map((l) => l.to);
+    for (let i = 0; i < dots.length; i++) for (let j = i + 1; j < dots.length; j++) expect(Math.hypot(dots[i]!.x - dots[j]!.x, dots[i]!.y - dots[j]!.y)).toBeGreaterThan(1);
+  });
+});
+
+function distanceToSegment(a: { x: number; y: number }, b: { x: number; y: number }, c: { x: number; y: number }): number {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const t = Math.max(0, Math.min(1, ((c.x - a.x) * dx + (c.y - a.y) * dy) / (dx * dx + dy * dy)));
+  return Math.hypot(a.x + t * dx - c.x, a.y + t * dy - c.y);
+}

@@ -1,11 +1,31 @@
 import type { Shape3D } from "replicad";
 import type { ResolvedPart } from "@/engine/parts/features";
 import { projectToView, type AssemblyAnchor, type ProjectedAssembly, type ProjectedPart, type ViewName } from "@/engine/drawing/projection";
+import { visibleAnchors, type PartTriangles } from "@/engine/drawing/assemblyAnchors";
 import { viewFrame, viewsForPart } from "@/engine/drawing/views";
 import { assemblyMatrix, transformPoint } from "../placement";
 import { projectShape } from "../projection/projectShape";
 import { placedCopy } from "../step";
+import { meshTriangles } from "../mesh";
+import type { KernelContext } from "../context";
 import { defineTask } from "./types";
+
+/** A coarse mesh is plenty to tell which part the viewer sees where (a cell is ~0.2–0.5 mm). */
+const ANCHOR_MESH = { toleranceMm: 0.2, angularTolerance: 0.5 };
+
+/** The part's triangles moved to its assembly placement. */
+function placedTriangles(ctx: KernelContext, shape: Shape3D, part: ResolvedPart): PartTriangles {
+  const mesh = meshTriangles(ctx.kernel, shape, ANCHOR_MESH);
+  const m = assemblyMatrix(part);
+  const positions = new Float64Array(mesh.positions.length);
+  for (let v = 0; v + 2 < positions.length; v += 3) {
+    const [x, y, z] = transformPoint(m, mesh.positions[v]!, mesh.positions[v + 1]!, mesh.positions[v + 2]!);
+    positions[v] = x;
+    positions[v + 1] = y;
+    positions[v + 2] = z;
+  }
+  return { partId: part.id, positions, indices: mesh.indices };
+}
 
 export interface ProjectTaskInput {
   /** Parts drawn one per sheet, each in its own frame with the views `viewsForPart` gives it. */
@@ -39,6 +59,7 @@ export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
     const frames = names.map((n) => viewFrame("block", n));
     const copies: Shape3D[] = [];
     const anchors: AssemblyAnchor[] = [];
+    const triangles: PartTriangles[] = [];
     try {
       for (const part of input.assembly.parts) {
         const built = ctx.buildPart(part);
@@ -49,7 +70,13 @@ export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
           (built.bbox.min[1] + built.bbox.max[1]) / 2,
           (built.bbox.min[2] + built.bbox.max[2]) / 2,
         );
-        for (const f of frames) anchors.push({ partId: part.id, view: f.name, point: projectToView(f, { x, y, z }) });
+        for (const f of frames) anchors.push({ partId: part.id, view: f.name, point: projectToView(f, { x, y, z }), clearanceMm: 0, visibleShare: 0 });
+        triangles.push(placedTriangles(ctx, built.shape, part));
+      }
+      // Leaders end on what the viewer sees of each part; a hidden part keeps its box centre.
+      for (const v of visibleAnchors(triangles, frames)) {
+        const i = anchors.findIndex((a) => a.partId === v.partId && a.view === v.view);
+        if (i >= 0) anchors[i] = v;
       }
       const compound = ctx.r.makeCompound(copies);
       try {

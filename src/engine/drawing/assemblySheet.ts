@@ -8,7 +8,8 @@ import type { ResolvedPart } from "../parts/features";
 import { arrangeViews } from "./layout/arrange";
 import type { Box } from "./layout/geometry";
 import { emptyBox, unionBox } from "./layout/geometry";
-import { line, shapesBox, translateShapes } from "./layout/shapes";
+import { balloonShapes, placeBalloons } from "./layout/balloons";
+import { shapesBox, translateShapes } from "./layout/shapes";
 import { centreShapes, edgeShapes } from "./layout/viewLines";
 import { sheetPoint, TEXT_HEIGHTS, type DrawingSheet, type SheetShape, type SheetSize } from "./model";
 import { formatMass, sheetRegions, type SheetCommon } from "./partSheet";
@@ -28,7 +29,6 @@ export interface AssemblySheetInput extends SheetCommon {
   extraNotes?: string[];
 }
 
-const BALLOON_RADIUS_MM = 4.5;
 const ROW_H = 6;
 const LIST_COLUMNS = [
   { title: "Item", width: 12 },
@@ -81,44 +81,29 @@ interface LaidOut {
   envelope: Box;
 }
 
-/** One assembly view with its balloons (in the view's preferred place: above it, in anchor order). */
+/** One assembly view with its balloons (in a row above it, leaders uncrossed: layout/balloons.ts). */
 function layoutAssemblyView(input: AssemblySheetInput, view: ProjectedAssembly["views"][number], scale: number, balloons: { item: number; partId: string }[]): LaidOut {
   const place = { origin: sheetPoint(0, 0), scale };
   const lines = [...edgeShapes(view, place), ...centreShapes(view, place)];
-  const box = shapesBox(lines);
-  const shapes = [...lines];
-  const anchors = balloons
-    .map((b) => ({ ...b, at: input.projected.anchors.find((a) => a.partId === b.partId && a.view === view.name)?.point }))
-    .filter((b): b is typeof b & { at: { x: number; y: number } } => !!b.at)
-    .map((b) => ({ ...b, x: b.at.x * scale, y: b.at.y * scale }))
-    .sort((a, b) => a.x - b.x);
-  let lastX = -Infinity;
-  const cy = box.maxY + 12;
-  for (const a of anchors) {
-    const cx = Math.max(a.x + 6, lastX + 2 * BALLOON_RADIUS_MM + 3);
-    lastX = cx;
-    const len = Math.hypot(cx - a.x, cy - a.y);
-    const ux = (a.x - cx) / len;
-    const uy = (a.y - cy) / len;
-    shapes.push({ type: "circle", layer: "dimension", centre: sheetPoint(cx, cy), radius: BALLOON_RADIUS_MM });
-    shapes.push({
-      type: "text",
-      layer: "dimension",
-      role: "label",
-      at: sheetPoint(cx, cy - TEXT_HEIGHTS.large / 2),
-      text: String(a.item),
-      heightMm: TEXT_HEIGHTS.large,
-      align: "centre",
-    });
-    shapes.push(line("dimension", sheetPoint(cx + ux * BALLOON_RADIUS_MM, cy + uy * BALLOON_RADIUS_MM), sheetPoint(a.x, a.y)));
-    shapes.push({ type: "circle", layer: "dimension", centre: sheetPoint(a.x, a.y), radius: 0.35 });
-    shapes.push({
-      type: "fill",
-      layer: "dimension",
-      points: Array.from({ length: 8 }, (_, k) => sheetPoint(a.x + 0.5 * Math.cos((k * Math.PI) / 4), a.y + 0.5 * Math.sin((k * Math.PI) / 4))),
-    });
-  }
+  const anchors = balloons.flatMap((b) => {
+    const at = input.projected.anchors.find((a) => a.partId === b.partId && a.view === view.name)?.point;
+    return at ? [{ item: b.item, x: at.x * scale, y: at.y * scale }] : [];
+  });
+  const shapes = [...lines, ...balloonShapes(placeBalloons(anchors, shapesBox(lines)))];
   return { name: view.name, shapes, envelope: shapesBox(shapes) };
+}
+
+/**
+ * The view a part's balloon goes in: the one where the part shows the widest visible patch (its anchor
+ * deepest inside it), the first view when it does nearly as well there (balloons kept together read
+ * easier), and the first view for a part that no view shows.
+ */
+export function balloonView(projected: ProjectedAssembly, partId: string): ViewName {
+  const first = projected.views[0]!.name;
+  const clearance = (v: ViewName) => projected.anchors.find((a) => a.partId === partId && a.view === v)?.clearanceMm ?? 0;
+  let best = first;
+  for (const v of projected.views) if (clearance(v.name) > clearance(best)) best = v.name;
+  return clearance(first) >= 0.7 * clearance(best) ? first : best;
 }
 
 export function buildAssemblySheet(input: AssemblySheetInput): DrawingSheet {
@@ -132,11 +117,9 @@ export function buildAssemblySheet(input: AssemblySheetInput): DrawingSheet {
     "Check the assembly moves freely and clamps before it is used on the machine; follow the machine maker's guidance.",
     ...(stamped ? [`Template checks failing: ${input.failingChecks.join("; ")}.`] : []),
   ];
-  // Balloons go in the front view; parts that the front view does not show fall back to the next view.
   const balloonsByView = new Map<ViewName, { item: number; partId: string }[]>();
-  const viewNames = input.projected.views.map((v) => v.name);
   input.parts.forEach((p, i) => {
-    const v = viewNames[0]!;
+    const v = balloonView(input.projected, p.id);
     const list = balloonsByView.get(v) ?? [];
     list.push({ item: i + 1, partId: p.id });
     balloonsByView.set(v, list);

@@ -56,11 +56,19 @@ export interface ProjectedPart {
   views: ProjectedView[];
 }
 
-/** Where a part's balloon leader points in an assembly view: the projected centre of its placed box. */
+/**
+ * Where a part's balloon leader points in an assembly view: a point on the part's visible faces, deepest
+ * inside its visible patch (assemblyAnchors.ts); for a part hidden in that view, the projected centre of
+ * its placed box with `visibleShare` 0.
+ */
 export interface AssemblyAnchor {
   partId: string;
   view: ViewName;
   point: ViewPoint;
+  /** How far the point lies inside the part's visible patch, model mm (0 or absent: hidden). */
+  clearanceMm?: number;
+  /** The part's visible fraction of its own outline area in this view (0 = hidden). */
+  visibleShare?: number;
 }
 
 /** The assembly projected as one body (parts at their placements), with an anchor per part and view. */
