@@ -21,6 +21,7 @@ import { machinesRouter, visesRouter } from "@server/modules/profiles/router";
 import {
   createDesignExports,
   createDesignService,
+  createDesignUpgrades,
   designsRouter,
   sharedRouter,
   storeCatalogue,
@@ -115,7 +116,14 @@ export function createApp(deps: AppDeps): express.Express {
   app.use("/api/machines", machinesRouter(db.models));
   const templateStore = deps.templates ?? builtInTemplates();
   const designs = createDesignService(db.models, deps.templateCatalogue ?? storeCatalogue(templateStore));
-  app.use("/api/designs", designsRouter(designs, createDesignExports(db.models, templateStore, deps.kernel)));
+  app.use(
+    "/api/designs",
+    designsRouter(
+      designs,
+      createDesignExports(db.models, templateStore, deps.kernel),
+      createDesignUpgrades(db.models, templateStore),
+    ),
+  );
   app.use("/api/shared", sharedRouter(designs));
   app.use("/api/templates", templatesRouter(templatesService(templateStore)));
   app.use("/api/calculators", calculatorsRouter(calculatorsService()));

@@ -18,6 +18,12 @@ export interface TemplateStore {
   get(id: string): CompiledTemplate | undefined;
   /** Where each template was read from (for messages). */
   sourceOf(id: string): string | undefined;
+  /**
+   * A published version of a template, current or earlier, when this store still holds it (saved designs
+   * pinned to an earlier version are compared with it). The built-in catalogue holds only the version in
+   * its YAML file; a store that keeps earlier versions answers for those too.
+   */
+  getVersion?(id: string, version: string): CompiledTemplate | undefined;
 }
 
 /** Thrown at start-up when a built-in template is broken; the message lists every file and reason. */
@@ -64,6 +70,10 @@ export function loadTemplateStore(dir = defaultTemplatesDir): TemplateStore {
     list: () => ordered,
     get: (id) => byId.get(id),
     sourceOf: (id) => sources.get(id),
+    getVersion: (id, version) => {
+      const compiled = byId.get(id);
+      return compiled?.template.version === version ? compiled : undefined;
+    },
   };
 }
 

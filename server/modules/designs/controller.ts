@@ -1,4 +1,5 @@
 import type { Request, Response } from "express";
+import type { DesignUpgradeQuery } from "@/shared/design-upgrade";
 import type {
   CreateDesignBody,
   DesignExportQuery,
@@ -7,6 +8,7 @@ import type {
 } from "@/shared/designs";
 import type { DesignExportService } from "./export-service";
 import type { DesignService } from "./service";
+import type { DesignUpgradeService } from "./upgrade-service";
 
 function ownerOf(req: Request): number {
   if (!req.user) throw new Error("designs route mounted without requireUser");
@@ -33,8 +35,17 @@ function abortOnClose(res: Response): AbortSignal {
 }
 
 /** The only designs code touching req/res. */
-export function designController(designs: DesignService, exports?: DesignExportService) {
+export function designController(
+  designs: DesignService,
+  exports?: DesignExportService,
+  upgrades?: DesignUpgradeService,
+) {
   return {
+    async upgrade(req: Request, res: Response) {
+      if (!upgrades) throw new Error("upgrade route mounted without an upgrade service");
+      const query = res.locals.query as DesignUpgradeQuery;
+      res.json({ upgrade: await upgrades.report(ownerOf(req), idOf(req), query) });
+    },
     async exportFile(req: Request, res: Response) {
       if (!exports) throw new Error("export route mounted without an export service");
       const query = res.locals.query as DesignExportQuery;

@@ -5,6 +5,7 @@ import type { TemplateStore } from "@server/templates";
 import { designExportService, type DesignExportService } from "./export-service";
 import { designRepository, shareLinkRepository } from "./repository";
 import { designService, type DesignService } from "./service";
+import { designUpgradeService, type DesignUpgradeService } from "./upgrade-service";
 import type { TemplateCatalogue } from "./template-catalogue";
 
 /** Wires the designs area over a database's models and a template catalogue. */
@@ -33,6 +34,11 @@ export function createDesignExports(
     templates,
     kernel,
   });
+}
+
+/** Wires "what changes on the current template version" over the compiled templates. */
+export function createDesignUpgrades(models: Models, templates: TemplateStore): DesignUpgradeService {
+  return designUpgradeService({ designs: designRepository(models), templates });
 }
 
 export { designsRouter, sharedRouter } from "./router";

@@ -6,12 +6,14 @@ import {
   shareTokenParamsSchema,
   updateDesignBodySchema,
 } from "@/shared/designs";
+import { designUpgradeQuerySchema } from "@/shared/design-upgrade";
 import { recordIdParamsSchema } from "@/shared/profiles";
 import { requireUser } from "@server/middleware/auth";
 import { validate } from "@server/middleware/validate";
 import { designController } from "./controller";
 import type { DesignExportService } from "./export-service";
 import type { DesignService } from "./service";
+import type { DesignUpgradeService } from "./upgrade-service";
 
 const idParams = validate({ params: recordIdParamsSchema });
 
@@ -19,8 +21,12 @@ const idParams = validate({ params: recordIdParamsSchema });
  * `/api/designs`: the signed-in user's saved designs and their share links (every role; guests 401).
  * Another user's design answers 404, exactly like a missing one.
  */
-export function designsRouter(designs: DesignService, exports: DesignExportService): Router {
-  const c = designController(designs, exports);
+export function designsRouter(
+  designs: DesignService,
+  exports: DesignExportService,
+  upgrades: DesignUpgradeService,
+): Router {
+  const c = designController(designs, exports, upgrades);
   const r = Router();
   r.use(requireUser);
   r.get("/", c.list);
@@ -42,6 +48,8 @@ export function designsRouter(designs: DesignService, exports: DesignExportServi
   r.post("/:id/restore", idParams, c.restore);
   r.post("/:id/share", idParams, c.share);
   r.delete("/:id/share", idParams, c.unshare);
+  // What changes if the design moves to the current template version (reading it changes nothing).
+  r.get("/:id/upgrade", validate({ params: recordIdParamsSchema, query: designUpgradeQuerySchema }), c.upgrade);
   r.get(
     "/:id/export",
     validate({ params: recordIdParamsSchema, query: designExportQuerySchema }),
