@@ -22,6 +22,7 @@ import type { Evaluation } from "@/engine/evaluate";
 import { buildCutList, buildOperationSheet, cutListCsv } from "@/engine/manufacture";
 import { getMaterial, isMaterialKey } from "@/engine/materials";
 import type { ResolvedPart } from "@/engine/parts/features";
+import { escapeNoteText } from "@/engine/template/notes";
 import type { Template } from "@/engine/template/schema";
 import type { KernelPool } from "@server/kernel";
 import type { ProjectTaskInput, ProjectTaskOutput, StepTaskInput, StepTaskOutput, StlTaskInput, StlTaskOutput } from "@server/kernel/tasks";
@@ -161,12 +162,17 @@ function packFor(req: ExportRequest): Pack {
   };
 }
 
+/** The template's notes for every sheet, as note text (from the evaluation; literal text for an older one). */
+function sheetNotesOf(req: ExportRequest): string[] {
+  return req.evaluation.drawingNotes?.sheet ?? (req.template.drawing?.notes ?? []).map(escapeNoteText);
+}
+
 function partInput(pack: Pack, part: ResolvedPart, projected: ProjectedPart, sheetNumber: number, sheetCount: number): PartSheetInput {
   const summary = pack.req.evaluation.partSummaries.find((s) => s.id === part.id);
   return {
     ...pack.common,
     part,
-    sheetNotes: pack.req.template.drawing?.notes ?? [],
+    sheetNotes: sheetNotesOf(pack.req),
     projected,
     ...(summary?.massKg != null ? { massKg: summary.massKg } : {}),
     material: materialInfo(part.material),
@@ -257,7 +263,7 @@ function assemblySheet(pack: Pack, projected: ProjectedAssembly, n: number, tota
   const mass = pack.req.evaluation.partSummaries.reduce((s, p) => (p.massKg == null ? s : s + p.massKg * p.quantity), 0);
   const { template, evaluation, units } = pack.req;
   const madeToSuit = madeToSuitNote(template.parameters, evaluation.parameters, units);
-  const extraNotes = [...(madeToSuit ? [madeToSuit] : []), ...(template.assembly?.notes ?? [])];
+  const extraNotes = [...(madeToSuit ? [escapeNoteText(madeToSuit)] : []), ...(evaluation.drawingNotes?.assembly ?? (template.assembly?.notes ?? []).map(escapeNoteText))];
   return buildAssemblySheet({ ...pack.common, parts: pack.parts, projected, materialNames, totalMassKg: mass, sheetNumber: n, sheetCount: total, extraNotes });
 }
 

@@ -26,6 +26,7 @@ import type { GeometryIssue } from "./parts/issues";
 import { resolveParts } from "./parts/resolve";
 import { DROPPED, resolveValue, scaleLengths } from "./parts/template-values";
 import { compileTemplate, rememberResult, type CompiledTemplate } from "./template/compile";
+import { resolveNote, type CompiledNote } from "./template/notes";
 import type { Template, UnitSystem } from "./template/schema";
 import { convertLength, formatLength } from "./units";
 
@@ -88,6 +89,11 @@ export interface Evaluation {
   blockedParts: string[];
   geometryIssues: GeometryIssue[];
   assembly: { fixtures: FixtureBox[] };
+  /**
+   * The template's sheet and assembly notes as note text (lengths marked in mm for the drawing to show in
+   * its units, template/notes.ts); each part's own notes are in `parts[].drawing.notes` in the same form.
+   */
+  drawingNotes: { sheet: string[]; assembly: string[] };
   /** Shown with every result that feeds a setup. */
   cautions: string[];
 }
@@ -194,6 +200,12 @@ export function evaluateTemplate(template: Template | CompiledTemplate, input: E
   // Parts.
   const fmt = (mm: number) => formatLength(mm, "mm", units);
   const partsResult = resolveParts(compiled.parts, scope, { mmPerTemplateUnit: compiled.mmPerTemplateUnit, materialKeys: MATERIAL_KEYS, fmt });
+  const noteCtx = { mmPerTemplateUnit: compiled.mmPerTemplateUnit, render: renderCtx };
+  const notesOf = (list: readonly CompiledNote[] | undefined) => (list ?? []).map((n) => resolveNote(n, scope, noteCtx));
+  for (const part of partsResult.parts) {
+    const own = compiled.notes.parts[part.id];
+    if (own && own.length > 0) part.drawing = { ...part.drawing, notes: notesOf(own) };
+  }
   const minWallMm = t.rules.minWall !== undefined ? t.rules.minWall * compiled.mmPerTemplateUnit : DEFAULT_MIN_WALL_MM;
   const design: GeometryIssue[] = [];
   const blocked = new Set(partsResult.blocked);
@@ -246,6 +258,7 @@ export function evaluateTemplate(template: Template | CompiledTemplate, input: E
     blockedParts: [...blocked],
     geometryIssues,
     assembly: { fixtures },
+    drawingNotes: { sheet: notesOf(compiled.notes.sheet), assembly: notesOf(compiled.notes.assembly) },
     cautions: [SETUP_CAUTION, ...(t.cautions ?? [])],
   };
 }

@@ -7,7 +7,12 @@
  */
 import { describe, expect, it } from "vitest";
 import { partVolumeMm3 } from "@/engine";
+import { formatter } from "@/engine/drawing/format";
+import { renderNote } from "@/engine/drawing/sheet/noteText";
 import { analysis, builtIn, evaluate, faceChamferMm3, failedAny, part, passed, summary } from "./catalogue-helpers";
+
+/** A part's notes as a sheet in these units prints them (lengths without a unit symbol, ISO 129-1). */
+const shown = (notes: string[] | undefined, units: "mm" | "in" = "mm") => (notes ?? []).map((n) => renderNote(n, formatter(units))).join(" ");
 
 const T = builtIn("parallels/matched-parallels.yaml");
 const disc = (d: number) => (Math.PI / 4) * d * d;
@@ -53,9 +58,14 @@ describe("matched parallels at their defaults (4 pairs 16–28 × 8 × 150, tool
 
   it("states the matched-pair tolerance, parallelism and flatness on every drawing", () => {
     for (const p of e.parts) {
-      const notes = p.drawing?.notes?.join(" ") ?? "";
-      expect(notes).toMatch(/equal in height within 0\.005 mm/);
-      expect(notes).toMatch(/parallel within 0\.005 mm and each flat within 0\.003 mm/);
+      const notes = shown(p.drawing?.notes);
+      expect(notes).toMatch(/equal in height within 0\.005 over/);
+      expect(notes).toMatch(/parallel within 0\.005 and each flat within 0\.003\./);
+      // On an inch drawing (1 in = 25.4 mm): 0.005 mm = .0002, 0.003 mm = .0001, 0.02 mm = .0008.
+      const inch = shown(p.drawing?.notes, "in");
+      expect(inch).toMatch(/equal in height within \.0002 over/);
+      expect(inch).toMatch(/parallel within \.0002 and each flat within \.0001\./);
+      expect(inch).toContain("within ±.0008;");
     }
   });
 });
@@ -137,9 +147,9 @@ describe("matched parallel checks pass and fail at their boundaries", () => {
     ["0.01", "0.005"],
     ["0.02", "0.01"],
   ])("the drawing notes follow a %s mm pair tolerance", (tol, flat) => {
-    const notes = evaluate(T, { pairTolerance: tol }).parts[0]!.drawing?.notes?.join(" ") ?? "";
-    expect(notes).toContain(`equal in height within ${tol} mm`);
-    expect(notes).toContain(`parallel within ${tol} mm and each flat within ${flat} mm`);
+    const notes = shown(evaluate(T, { pairTolerance: tol }).parts[0]!.drawing?.notes);
+    expect(notes).toContain(`equal in height within ${tol} over`);
+    expect(notes).toContain(`parallel within ${tol} and each flat within ${flat}.`);
   });
 
   it("drops the holes when they are not wanted", () => {

@@ -78,6 +78,18 @@ describe("files", () => {
     expect(readFileSync(file, "utf8").split(/\r\n/)[0]).toMatch(/\(in\)/);
   });
 
+  it("--units in: the template's notes show their lengths in decimal inches (0.01 mm = .0004 in, 1 in = 25.4 mm)", async () => {
+    const file = out("cam-in.svg");
+    const { code } = await run(["cam-vise-stop", "--format", "svg", "--part", "cam", "--units", "in", "--out", file]);
+    expect(code).toBe(0);
+    const svg = readFileSync(file, "utf8");
+    // "Bore the eccentric hole in a four-jaw chuck, dialled to within {0.01:len} of the offset."
+    expect(svg).toMatch(/within[\s\S]{0,80}\.0004/);
+    expect(svg).not.toMatch(/0\.01 mm/);
+    expect(svg).not.toMatch(/:len/);
+    expect(svg).toContain("Dimensions in inches");
+  }, 120_000);
+
   it("writes a part's SVG through the kernel; failing checks give exit 1 and a warning", async () => {
     const file = out("washer.svg");
     const { code, err } = await run(["cam-vise-stop", "--format", "svg", "--part", "washer", "--set", "camEccentricity=2.5", "--projection", "third", "--out", file]);

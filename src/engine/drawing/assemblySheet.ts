@@ -5,6 +5,7 @@
  * quantity, name, material, drawing number, item numbers rising upward from the header).
  */
 import type { ResolvedPart } from "../parts/features";
+import { formatter } from "./format";
 import { arrangeViews } from "./layout/arrange";
 import type { Box } from "./layout/geometry";
 import { emptyBox, unionBox } from "./layout/geometry";
@@ -16,6 +17,7 @@ import { formatMass, sheetRegions, type SheetCommon } from "./partSheet";
 import type { ProjectedAssembly, ViewName } from "./projection";
 import { chooseScale, type DrawingScale } from "./scale";
 import { errorStamp, frame, notesBlock } from "./sheet/notes";
+import { renderNote } from "./sheet/noteText";
 import { fitText, TITLE_BLOCK_HEIGHT_MM, TITLE_BLOCK_WIDTH_MM, titleBlock } from "./sheet/titleBlock";
 import { frameRect, SHEET_SIZES, sheetSeries } from "./sheets";
 
@@ -25,7 +27,7 @@ export interface AssemblySheetInput extends SheetCommon {
   /** Display name of each part's material, by part id. */
   materialNames: Record<string, string>;
   totalMassKg?: number;
-  /** Notes of the template's own (what the design was made to suit, assembly instructions). */
+  /** Notes of the template's own (what the design was made to suit, assembly instructions), as note text. */
   extraNotes?: string[];
 }
 
@@ -113,7 +115,7 @@ export function buildAssemblySheet(input: AssemblySheetInput): DrawingSheet {
   const notes = [
     `Dimensions in ${input.units === "mm" ? "mm" : "inches"}. Assembly for reference: make each part from its own drawing.`,
     `General tolerances ISO 2768-${input.generalTolerance} on the part drawings.`,
-    ...(input.extraNotes ?? []),
+    ...(input.extraNotes ?? []).map((n) => renderNote(n, formatter(input.units))),
     "Check the assembly moves freely and clamps before it is used on the machine; follow the machine maker's guidance.",
     ...(stamped ? [`Template checks failing: ${input.failingChecks.join("; ")}.`] : []),
   ];

@@ -10,6 +10,7 @@ import { MATERIAL_KEYS } from "../materials";
 import { compileValue, namesIn, type ValueNode } from "../parts/template-values";
 import { mmPerUnit } from "../units";
 import { compileMessage, MessageTemplateError, type CompiledMessage } from "./message";
+import { compileNote, type CompiledNote } from "./notes";
 import type { AnalysisSpec, CheckSpec, DerivedKind, ParameterSpec, Template } from "./schema";
 import { TemplateValidationError, type TemplateIssue } from "./issues";
 
@@ -83,8 +84,17 @@ export interface CompiledTemplate {
   readonly checks: readonly CompiledCheck[];
   readonly parts: readonly CompiledPart[];
   readonly fixtures: readonly { id: string; label: string; node: ValueNode }[];
+  /** Drawing notes with their placeholders compiled: every sheet's, the assembly sheet's, each part's. */
+  readonly notes: CompiledNotes;
   /** Millimetres per template length unit. */
   readonly mmPerTemplateUnit: number;
+}
+
+export interface CompiledNotes {
+  sheet: readonly CompiledNote[];
+  assembly: readonly CompiledNote[];
+  /** By part id. */
+  parts: Readonly<Record<string, readonly CompiledNote[]>>;
 }
 
 export interface CompileDeps {
@@ -247,6 +257,16 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
     }
   });
 
+  const compileNotes = (list: readonly string[] | undefined, path: string): CompiledNote[] =>
+    (list ?? []).flatMap((n, j) => {
+      const c = attempt(`${path}[${j}]`, () => compileNote(n, { ...all, context: `${path}[${j}]` }));
+      return c ? [c] : [];
+    });
+  const notes: { sheet: CompiledNote[]; assembly: CompiledNote[]; parts: Record<string, CompiledNote[]> } = {
+    sheet: compileNotes(template.drawing.notes, "drawing.notes"),
+    assembly: compileNotes(template.assembly.notes, "assembly.notes"),
+    parts: {},
+  };
   const partIds = new Set<string>();
   const parts: CompiledPart[] = [];
   template.parts.forEach((part, i) => {
@@ -263,7 +283,11 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
     if (typeof part.material === "string" && !part.material.startsWith("=") && !materialKeys.includes(part.material)) {
       issues.push({ path: `${path}.material`, message: `"${part.material}" is not in the materials catalogue (${materialKeys.join(", ")}).` });
     }
-    const node = attempt(path, () => compileValue(part, path, undefined, all));
+    // Notes are compiled as messages on their own (below); the part's value tree leaves them out.
+    const { notes: partNotes, ...drawingRest } = part.drawing ?? {};
+    const geometry = part.drawing ? { ...part, drawing: drawingRest } : part;
+    notes.parts[part.id] = compileNotes(partNotes, `${path}.drawing.notes`);
+    const node = attempt(path, () => compileValue(geometry, path, undefined, all));
     if (node) parts.push({ id: part.id, node, parameters: [...paramsOf(namesIn(node, new Set(), ["placement", "explode"]))] });
   });
 
@@ -275,5 +299,5 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
   });
 
   if (issues.length > 0) throw new TemplateValidationError(issues);
-  return { template, parameters, derived, analyses, checks, parts, fixtures, mmPerTemplateUnit: factors.mmPerTemplateUnit };
+  return { template, parameters, derived, analyses, checks, parts, fixtures, notes, mmPerTemplateUnit: factors.mmPerTemplateUnit };
 }

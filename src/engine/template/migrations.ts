@@ -6,6 +6,10 @@
  * Format 0 is the pre-release draft format: parameters said `type:` instead of `kind:`, checks said
  * `level:` instead of `severity:` and `concerns:` instead of `parameters:`, and the document had no
  * `formatVersion` at all. Step 0 → 1 renames those fields.
+ *
+ * Format 2 reads drawing notes as messages with placeholders (template/notes.ts), so a length can be shown
+ * in the drawing's units. Step 1 → 2 doubles the braces of format-1 notes, which were plain text, so they
+ * print exactly as before.
  */
 import { CURRENT_FORMAT_VERSION } from "./schema";
 
@@ -25,6 +29,18 @@ function renameKey(obj: unknown, from: string, to: string): unknown {
   return out;
 }
 
+/** Format-1 notes were literal: double their braces so format 2 prints them unchanged. `=` notes are expressions. */
+function literalNotes(notes: unknown): unknown {
+  if (!Array.isArray(notes)) return notes;
+  return notes.map((n) => (typeof n === "string" && !n.startsWith("=") ? n.replace(/[{}]/g, (c) => c + c) : n));
+}
+
+function withNotes(holder: unknown): unknown {
+  if (!holder || typeof holder !== "object" || Array.isArray(holder)) return holder;
+  const h = holder as Record<string, unknown>;
+  return "notes" in h ? { ...h, notes: literalNotes(h.notes) } : holder;
+}
+
 export const migrations: readonly Migration[] = [
   {
     from: 0,
@@ -34,6 +50,23 @@ export const migrations: readonly Migration[] = [
       const out: Record<string, unknown> = { ...doc, formatVersion: 1 };
       if (Array.isArray(doc.parameters)) out.parameters = doc.parameters.map((p) => renameKey(p, "type", "kind"));
       if (Array.isArray(doc.checks)) out.checks = doc.checks.map((c) => renameKey(renameKey(c, "level", "severity"), "concerns", "parameters"));
+      return out;
+    },
+  },
+  {
+    from: 1,
+    to: 2,
+    description: "drawing notes take placeholders: braces in drawing.notes, assembly.notes and parts[].drawing.notes doubled",
+    migrate(doc) {
+      const out: Record<string, unknown> = { ...doc, formatVersion: 2 };
+      if ("drawing" in doc) out.drawing = withNotes(doc.drawing);
+      if ("assembly" in doc) out.assembly = withNotes(doc.assembly);
+      if (Array.isArray(doc.parts)) {
+        out.parts = doc.parts.map((p) => {
+          if (!p || typeof p !== "object" || Array.isArray(p) || !("drawing" in p)) return p;
+          return { ...(p as Record<string, unknown>), drawing: withNotes((p as Record<string, unknown>).drawing) };
+        });
+      }
       return out;
     },
   },

@@ -1,5 +1,5 @@
 /**
- * The template format (format version 1): one zod schema for the whole YAML document. Types are inferred
+ * The template format (format version 2): one zod schema for the whole YAML document. Types are inferred
  * from it; `compile.ts` adds the checks a schema cannot express (names defined before use, defaults inside
  * their limits, calculators that exist, materials in the catalogue, expressions on the whitelist).
  *
@@ -11,7 +11,7 @@
 import { z } from "zod";
 import { expressionSchema, templateVocabulary } from "../parts/features";
 
-export const CURRENT_FORMAT_VERSION = 1;
+export const CURRENT_FORMAT_VERSION = 2;
 
 export const UNIT_SYSTEMS = ["mm", "in"] as const;
 export const unitSystemSchema = z.enum(UNIT_SYSTEMS);
@@ -157,7 +157,7 @@ export const fixtureBoxSchema = z.strictObject({
 });
 export const assemblySchema = z.strictObject({
   fixtures: z.array(fixtureBoxSchema).max(8).default([]),
-  /** Assembly notes printed on the assembly sheet. */
+  /** Assembly notes printed on the assembly sheet (placeholders as in drawing notes, template/notes.ts). */
   notes: z.array(z.string().max(300)).max(10).optional(),
 });
 
@@ -168,7 +168,10 @@ export const drawingHintsSchema = z.strictObject({
   generalTolerance: z.enum(["f", "m", "c", "v"]).default("m"),
   /** Views for parts that do not list their own. */
   views: z.array(z.enum(["front", "top", "right", "left", "bottom", "rear"])).min(1).max(6).optional(),
-  /** Notes printed on every sheet. */
+  /**
+   * Notes printed on every sheet. Placeholders as in check messages; `{expr:len}` is a length shown in the
+   * drawing's units without a symbol (template/notes.ts).
+   */
   notes: z.array(z.string().max(300)).max(20).optional(),
   /** Show the assembly sheet. */
   assemblySheet: z.boolean().default(true),

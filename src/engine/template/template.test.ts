@@ -17,7 +17,7 @@ const deps = { getCalculator: (kind: string) => (kind === doubler.kind ? doubler
 
 function minimal(overrides: Record<string, unknown> = {}): Record<string, unknown> {
   return {
-    formatVersion: 1,
+    formatVersion: 2,
     id: "test-block",
     version: "1.0.0",
     name: "Test block",
@@ -195,20 +195,38 @@ describe("format migrations", () => {
     return { ...doc, parameters: params, checks };
   };
 
-  it("upgrades a format-0 draft step by step to format 1", () => {
+  it("upgrades a format-0 draft step by step to the current format", () => {
     const result = migrateTemplateDocument(draft());
     expect(result.fromVersion).toBe(0);
-    expect(result.applied).toEqual(["0 → 1: parameters[].type → kind, checks[].level → severity, checks[].concerns → parameters"]);
-    expect(result.document.formatVersion).toBe(1);
+    expect(result.applied).toEqual([
+      "0 → 1: parameters[].type → kind, checks[].level → severity, checks[].concerns → parameters",
+      "1 → 2: drawing notes take placeholders: braces in drawing.notes, assembly.notes and parts[].drawing.notes doubled",
+    ]);
+    expect(result.document.formatVersion).toBe(2);
     const t = loadTemplate(stringify(draft()));
     expect(t.parameters[0]!.kind).toBe("length");
     expect(t.checks[0]!.severity).toBe("warning");
     expect(t.checks[0]!.parameters).toEqual(["size"]);
   });
 
+  it("format 1 notes were plain text: their braces are doubled so they still print as written; = notes stay expressions", () => {
+    const doc = minimal({
+      formatVersion: 1,
+      drawing: { notes: ["Stamp {A} on the face."] },
+      assembly: { notes: ["Fit {B} last."] },
+      parts: [{ id: "block", name: "Block", material: "mild-steel", features: [{ kind: "block", size: { x: 10, y: 10, z: 10 } }], drawing: { notes: ["Mark {C}.", "='x'"] } }],
+    });
+    const out = migrateTemplateDocument(doc).document as { drawing: { notes: string[] }; assembly: { notes: string[] }; parts: { drawing: { notes: string[] } }[] };
+    expect(out.drawing.notes).toEqual(["Stamp {{A}} on the face."]);
+    expect(out.assembly.notes).toEqual(["Fit {{B}} last."]);
+    expect(out.parts[0]!.drawing.notes).toEqual(["Mark {{C}}.", "='x'"]);
+    // And the old file still loads.
+    expect(() => loadAndCompileTemplate(stringify(doc), deps)).not.toThrow();
+  });
+
   it("leaves a current document alone and refuses a future one", () => {
     expect(migrateTemplateDocument(minimal()).applied).toEqual([]);
-    expect(reasons(stringify(minimal({ formatVersion: 9 }))).join("\n")).toMatch(/formatVersion: formatVersion 9 is newer than this server understands \(1\)/);
+    expect(reasons(stringify(minimal({ formatVersion: 9 }))).join("\n")).toMatch(/formatVersion: formatVersion 9 is newer than this server understands \(2\)/);
     expect(reasons(stringify(minimal({ formatVersion: "one" }))).join("\n")).toMatch(/formatVersion must be a whole number/);
   });
 });

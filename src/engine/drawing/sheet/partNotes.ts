@@ -5,6 +5,7 @@
  */
 import type { ResolvedFeature, ResolvedPart } from "../../parts/features";
 import type { Formatter } from "../format";
+import { renderNote } from "./noteText";
 
 export type ToleranceClass = "f" | "m" | "c" | "v";
 
@@ -17,8 +18,8 @@ export interface PartNoteInput {
   /** The material's own heat-treatment remark and whether it can be hardened in a small shop. */
   material?: { name: string; hardenable: boolean; heatTreatmentNote?: string };
   failingChecks: string[];
-  /** Notes the template prints on every sheet. Those about units or general tolerances are left out: the
-   * drawing writes its own, in the units the user chose. */
+  /** Notes the template prints on every sheet (note text, template/notes.ts). Those about units or general
+   * tolerances are left out: the drawing writes its own, in the units the user chose. */
   sheetNotes?: string[];
 }
 
@@ -44,11 +45,12 @@ export function partNotes(input: PartNoteInput): string[] {
   if (hasFit) notes.push("Fits (e.g. H7) to ISO 286-1/-2; check reamed and bored sizes with a gauge.");
   const hasThread = all.some((f) => f.kind === "thread");
   if (hasThread) notes.push("Threads ISO metric (ISO 261/965-1), tolerance class 6H internal, 6g external unless stated.");
-  const own = [...(part.drawing?.notes ?? []), ...(input.sheetNotes ?? []).filter((n) => !/dimensions in|ISO 2768|general tolerance/i.test(n))]
+  const sheetOwn = (input.sheetNotes ?? []).map((n) => renderNote(n, fmt)).filter((n) => !/dimensions in|ISO 2768|general tolerance/i.test(n));
+  const own = [...(part.drawing?.notes ?? []).map((n) => renderNote(n, fmt)), ...sheetOwn]
     .map((n) => n.trim())
     .filter(Boolean);
   // The template's own edge note replaces the generated one.
-  if (!own.some((n) => /sharp edge|burr/i.test(n))) notes.push("Remove burrs and break sharp edges about 0.2 × 45° unless shown otherwise.");
+  if (!own.some((n) => /sharp edge|burr/i.test(n))) notes.push(`Remove burrs and break sharp edges about ${fmt.length(0.2)} × 45° unless shown otherwise.`);
   if (part.finish) notes.push(`Finish: ${sentence(part.finish)}`);
   if (part.heatTreatment) notes.push(`Heat treatment: ${sentence(part.heatTreatment)}`);
   else if (input.material?.hardenable) {
