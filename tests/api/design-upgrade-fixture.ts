@@ -25,6 +25,9 @@ export interface VersionedStore extends TemplateStore {
   publish(version: "1.0.0" | "2.0.0"): void;
 }
 
+/** No templates at all: for a test that needs only the test template. */
+export const noTemplates: TemplateStore = { list: () => [], get: () => undefined, sourceOf: () => undefined };
+
 export function versionedStore(base: TemplateStore = builtInTemplates()): VersionedStore {
   const versions = new Map(["1.0.0", "2.0.0"].map((v) => [v, compileFixture(v)]));
   let current = versions.get("1.0.0")!;

@@ -9,6 +9,13 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { evaluateTemplate } from "@/engine";
 import { getMaterial } from "@/engine/materials";
+import {
+  inRangeCheckChanges,
+  outOfRangeDecisions,
+  padThicknessDropped,
+  screwDepthAdded,
+  stopHeightDefaultMoved,
+} from "@/features/designs/test/upgrade-fixtures";
 import { designUpgradeResponseSchema, type DesignUpgrade } from "@/shared/design-upgrade";
 import { designResponseSchema, type Design, type DesignParameters } from "@/shared/designs";
 import { apiErrorBodySchema } from "@/shared/errors";
@@ -109,14 +116,7 @@ describe("a design inside the new limits", () => {
         from: { min: mm(40), max: mm(200) },
         to: { min: mm(40), max: mm(150) },
       },
-      {
-        kind: "default-changed",
-        key: "stopHeight",
-        label: "Stop height",
-        from: mm(20),
-        to: mm(24),
-        affectsDesign: false,
-      },
+      stopHeightDefaultMoved,
       {
         kind: "limits-changed",
         key: "stopHeight",
@@ -140,8 +140,8 @@ describe("a design inside the new limits", () => {
         added: [getMaterial("aluminium-6082").name],
         removed: [],
       },
-      { kind: "added", key: "screwDepth", label: "Screw depth", default: mm(10) },
-      { kind: "removed", key: "padThickness", label: "Pad thickness", saved: mm(3) },
+      screwDepthAdded,
+      padThicknessDropped,
     ]);
     // Carried to the configurator: every saved value the new version still asks for, unchanged.
     expect(up.carried).toEqual({
@@ -158,23 +158,7 @@ describe("a design inside the new limits", () => {
     expect(checks).toMatchObject({ compared: true, evaluatedOnNew: true, note: null, failingErrorsOnNew: 1 });
     // 20 mm: at least 15 mm on 1.0.0 (passes), at least 22 mm on 2.0.0 (fails); 130 mm: over 120 mm on
     // 1.0.0 (warns), within 150 mm on 2.0.0. The new screw-depth note passes (10 ≤ 20 mm): not a change.
-    expect(checks.changes).toEqual([
-      {
-        id: "tall-enough",
-        severity: "error",
-        before: { passed: true, message: "The stop stands 20 mm tall." },
-        after: { passed: false, message: "The stop stands only 20 mm tall; make it at least 22 mm." },
-      },
-      {
-        id: "wide-vise",
-        severity: "warning",
-        before: {
-          passed: false,
-          message: "A 130 mm jaw is wider than this stop is drawn for (up to 120 mm).",
-        },
-        after: { passed: true, message: "A 130 mm jaw suits this stop." },
-      },
-    ]);
+    expect(checks.changes).toEqual(inRangeCheckChanges);
   });
 
   it("shows values and messages in inches when asked (1 in = 25.4 mm)", async () => {
@@ -197,23 +181,9 @@ describe("a design inside the new limits", () => {
 describe("a design outside the new limits", () => {
   it("flags the value beyond the limit and carries it unchanged, replaces a choice no longer offered", async () => {
     const up = await upgradeOf(owner.agent, outOfRange.id);
-    expect(up.parameters.filter((p) => p.kind === "out-of-range" || p.kind === "not-offered")).toEqual([
-      {
-        kind: "out-of-range",
-        key: "jawWidth",
-        label: "Jaw width",
-        saved: { value: 160, text: "160 mm" },
-        limits: { min: { value: 40, text: "40 mm" }, max: { value: 150, text: "150 mm" } },
-      },
-      {
-        kind: "not-offered",
-        key: "screw",
-        label: "Screw",
-        saved: { value: "M5", text: "M5" },
-        offered: ["M6", "M8"],
-        replacement: { value: "M6", text: "M6" },
-      },
-    ]);
+    expect(up.parameters.filter((p) => p.kind === "out-of-range" || p.kind === "not-offered")).toEqual(
+      outOfRangeDecisions,
+    );
     expect(up.carried).toMatchObject({ jawWidth: 160, screw: "M6" });
     // 160 mm is outside 2.0.0's limits, so 2.0.0 cannot be evaluated yet: no guessing at its checks.
     expect(up.checks).toMatchObject({

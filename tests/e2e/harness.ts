@@ -15,6 +15,7 @@ import path from "node:path";
 import type { Server } from "node:http";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
 import { projectRoot } from "@server/config";
+import type { AppDeps } from "@server/app";
 import type { Database } from "@server/db";
 import { userRepository } from "@server/modules/auth/repository";
 import { authService } from "@server/modules/auth/service";
@@ -60,9 +61,13 @@ async function ensureClientBuilt(): Promise<void> {
   await build({ root: projectRoot, logLevel: "warn" });
 }
 
-export async function startApp(): Promise<E2eApp> {
+/** `deps` replaces parts of the app's outside world (e.g. a template store of the test's own). */
+export async function startApp(options: { deps?: Partial<AppDeps> } = {}): Promise<E2eApp> {
   await ensureClientBuilt();
-  const { app, db, close } = await createTestApp({ config: { env: "production", serveClient: true } });
+  const { app, db, close } = await createTestApp({
+    config: { env: "production", serveClient: true },
+    ...(options.deps ? { deps: options.deps } : {}),
+  });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(0, "127.0.0.1", () => resolve(s));
     s.once("error", reject);

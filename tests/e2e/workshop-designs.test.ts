@@ -115,7 +115,8 @@ describe("saved designs in the browser", () => {
     // Pinned to the catalogue's version, and opened in the configurator with its values in the address.
     expect(await card.textContent()).toContain("v1.0.0");
     const href = await card.getByRole("link", { name: "Open in the configurator" }).getAttribute("href");
-    expect(href).toBe("/templates/cam-vise-stop?units=mm&jawWidth=100&jawThickness=20");
+    // …and the design's id, so the configurator can offer to save changes back onto it.
+    expect(href).toMatch(/^\/templates\/cam-vise-stop\?units=mm&jawWidth=100&jawThickness=20&saved-design=\d+$/);
 
     await card.getByRole("button", { name: /^Rename/ }).click();
     await page.getByLabel("Design name").fill("");

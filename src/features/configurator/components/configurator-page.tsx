@@ -28,11 +28,22 @@ export interface ViewerSlotProps {
   request: { parameters: Record<string, ParameterValue>; units: LengthUnit } | null;
 }
 
+/** What the page hands a "save back onto the design it was opened from" panel (composed in by the route). */
+export interface SaveTargetSlotProps {
+  /** The template version shown, the one a save puts the design on. */
+  templateVersion: string;
+  /** In the template's own units; null while a field has a problem. */
+  parameters: Record<string, ParameterValue> | null;
+  units: LengthUnit;
+}
+
 export interface ConfiguratorPageProps {
   templateId: string;
   /** Null while the sign-in is still being checked (nothing account-related is shown yet). */
   signedIn: boolean | null;
   renderViewer: (props: ViewerSlotProps) => ReactNode;
+  /** Shown to a signed-in user above "Save this design" when the page was opened from a saved design. */
+  renderSaveTarget?: (props: SaveTargetSlotProps) => ReactNode;
   links: { catalogue: string; signIn: string; vises: string };
 }
 
@@ -85,6 +96,7 @@ function Configurator({
   template,
   signedIn,
   renderViewer,
+  renderSaveTarget,
   links,
 }: ConfiguratorPageProps & { template: TemplateDetail }) {
   const config = useConfiguration(template);
@@ -193,12 +205,20 @@ function Configurator({
             <ResultsPlaceholder failed={live.status.kind === "server-problem" ? live.status.message : null} />
           )}
           <div className="space-y-4">
+            {signedIn && renderSaveTarget
+              ? renderSaveTarget({
+                  templateVersion: template.version,
+                  parameters: config.templateParameters,
+                  units,
+                })
+              : null}
             {signedIn ? (
               <SaveDesignForm
                 templateId={template.id}
                 templateName={template.name}
                 parameters={config.templateParameters}
                 units={units}
+                asNew={Boolean(renderSaveTarget)}
               />
             ) : null}
             {signedIn === null ? null : (

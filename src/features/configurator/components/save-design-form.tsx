@@ -15,7 +15,10 @@ export function SaveDesignForm({
   templateName,
   parameters,
   units,
+  asNew = false,
 }: {
+  /** True beside a panel that saves onto an existing design: this one then makes another. */
+  asNew?: boolean;
   templateId: string;
   templateName: string;
   /** In the template's own units; null while a field has a problem. */
@@ -52,7 +55,7 @@ export function SaveDesignForm({
       className="rounded-lg border border-steel-200 bg-white p-4 shadow-sm"
     >
       <h2 id="save-heading" className="text-xl">
-        Save this design
+        {asNew ? "Save as a new design" : "Save this design"}
       </h2>
       <form noValidate onSubmit={submit} className="mt-2 space-y-3">
         <TextField

@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { useSearchParams } from "react-router";
 import type { ParameterValue } from "@/engine/parameters";
@@ -74,6 +74,14 @@ export function useConfiguration(template: TemplateDetail) {
   }, [specs, state, template.units, units]);
   const valid = Object.keys(problems).length === 0;
 
+  // A value from the address outside its limits (a bookmark, a saved design opened on a newer version)
+  // is shown with its message at once, not only after the person touches the field.
+  useEffect(() => {
+    if (!valid) void form.trigger();
+    // Only on arrival; later problems show as the person types.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
+
   const userParameters = useMemo(
     () => (valid ? parameterValues(specs, state, units, units) : null),
     [valid, specs, state, units],
@@ -124,7 +132,7 @@ export function useConfiguration(template: TemplateDetail) {
   // The address bar follows every valid configuration; an address changed from outside (a link to
   // another configuration of this template) is read back in.
   const wanted = templateParameters
-    ? writeUrlConfiguration(specs, templateParameters, units).toString()
+    ? writeUrlConfiguration(specs, templateParameters, units, searchParams).toString()
     : null;
   useSearchState(wanted, (params) => {
     const url = readUrlConfiguration(params, specs);

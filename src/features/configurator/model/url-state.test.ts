@@ -14,6 +14,16 @@ describe("the configuration in the address", () => {
     expect(params.toString()).toBe("units=in&jawWidth=101.6&finish=blued&chamferEdges=false");
   });
 
+  it("keeps entries that can never be a parameter, and drops stale parameters of the address", () => {
+    const params = writeUrlConfiguration(
+      specs,
+      { jawWidth: 120 },
+      "mm",
+      new URLSearchParams("units=in&jawWidth=90&holeCount=5&saved-design=12"),
+    );
+    expect(params.toString()).toBe("units=mm&jawWidth=120&saved-design=12");
+  });
+
   it("reads back what it wrote and ignores what does not fit", () => {
     const read = readUrlConfiguration(
       new URLSearchParams("units=in&jawWidth=101.6&holeCount=abc&chamferEdges=maybe&finish=blued&other=1"),

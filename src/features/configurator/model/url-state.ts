@@ -35,11 +35,19 @@ export function readUrlConfiguration(
   return { units, values };
 }
 
-/** The search string for a configuration: units first, then the changed parameters in the template's order. */
+/** A parameter key's shape (src/engine/template/schema.ts `keySchema`): lower camel case, no hyphens. */
+const parameterKeyShape = /^[a-z][a-zA-Z0-9]*$/;
+
+/**
+ * The search string for a configuration: units first, then the changed parameters in the template's
+ * order, then whatever entries of `carry` could never be a parameter (a key with a hyphen, such as the
+ * `saved-design` a page composed around the configurator put there), so they survive the rewrite.
+ */
 export function writeUrlConfiguration(
   specs: readonly ParameterSpecView[],
   values: Readonly<Record<string, ParameterValue>>,
   units: LengthUnit,
+  carry?: URLSearchParams,
 ): URLSearchParams {
   const params = new URLSearchParams();
   params.set("units", units);
@@ -47,6 +55,9 @@ export function writeUrlConfiguration(
     const value = values[spec.key];
     if (value === undefined || value === spec.default) continue;
     params.set(spec.key, String(value));
+  }
+  for (const [key, value] of carry ?? []) {
+    if (key !== "units" && !parameterKeyShape.test(key)) params.append(key, value);
   }
   return params;
 }

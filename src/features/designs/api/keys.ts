@@ -6,5 +6,7 @@ export const designKeys = {
   all: ["designs"] as const,
   list: () => ["designs", "list"] as const,
   detail: (id: number) => ["designs", "detail", id] as const,
+  /** What changes on the current template version, with values shown in `units`. */
+  upgrade: (id: number, units: string) => ["designs", "detail", id, "upgrade", units] as const,
   shared: (token: string) => ["shared-designs", token] as const,
 };

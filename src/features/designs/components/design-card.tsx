@@ -11,6 +11,7 @@ import { DesignDownloads, type MachineChoice } from "./design-downloads";
 import { DetailsForm } from "./details-form";
 import { ParameterList } from "./parameter-list";
 import { SharePanel } from "./share-panel";
+import { UpgradePanel } from "./upgrade-panel";
 import { VersionNote } from "./version-note";
 
 /**
@@ -33,10 +34,14 @@ export function DesignCard({
   const [editing, setEditing] = useState(false);
   const [sharing, setSharing] = useState(false);
   const [downloading, setDownloading] = useState(false);
+  const [comparing, setComparing] = useState(false);
   const update = useUpdateDesign();
   const duplicate = useDuplicateDesign();
   const headingId = `design-${design.id}-name`;
   const canOpen = design.templateName !== null;
+  // A design on an older version opens on the new one only through the comparison (its values may need
+  // a decision first); one on the current version opens directly, ready to be saved back.
+  const opensDirectly = canOpen && !design.newerVersion;
 
   return (
     <article
@@ -79,16 +84,13 @@ export function DesignCard({
         newerVersion={design.newerVersion}
         action={
           design.newerVersion ? (
-            <Button
-              variant="secondary"
-              disabled={update.isPending}
-              onClick={() => update.mutate({ id: design.id, changes: { useCurrentTemplateVersion: true } })}
-            >
-              Move to version {design.newerVersion}
+            <Button variant="secondary" aria-expanded={comparing} onClick={() => setComparing((c) => !c)}>
+              {comparing ? "Hide the differences" : `What changes in version ${design.newerVersion}?`}
             </Button>
           ) : null
         }
       />
+      {comparing && design.newerVersion ? <UpgradePanel design={design} /> : null}
 
       <details className="group">
         <summary className="cursor-pointer font-semibold text-steel-800">
@@ -101,9 +103,11 @@ export function DesignCard({
       </details>
 
       <div className="flex flex-wrap gap-2">
-        {canOpen ? (
+        {opensDirectly ? (
           <Link
-            to={configuratorHref(design.templateId, design.units, design.parameters)}
+            to={configuratorHref(design.templateId, design.units, design.parameters, {
+              savedDesignId: design.id,
+            })}
             className={buttonClasses("primary")}
           >
             Open in the configurator

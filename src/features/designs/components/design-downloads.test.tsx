@@ -83,6 +83,6 @@ describe("design downloads", () => {
   it("offers no files for a design pinned to an older version, and says what to do", () => {
     render(<DesignDownloads design={{ ...design, newerVersion: "1.1.0" }} machines={machines} />);
     expect(screen.queryByRole("button")).toBeNull();
-    expect(screen.getByText(/move this design to version 1\.1\.0/)).toBeTruthy();
+    expect(screen.getByText(/see what changes in version 1\.1\.0/)).toBeTruthy();
   });
 });

@@ -26,7 +26,7 @@ const files: Array<{ format: DesignExportFormat; label: string }> = [
 
 /**
  * The files of a saved design, drawn on the version it is pinned to, in the units it works in. A design
- * pinned to an older version must be moved first: the server only draws the current version.
+ * pinned to an older version must be saved on the current one first: the server only draws that.
  */
 export function DesignDownloads({
   design,
@@ -46,8 +46,8 @@ export function DesignDownloads({
   if (design.newerVersion) {
     return (
       <p className="text-sm text-steel-700">
-        Files are drawn on the current template version only: move this design to version{" "}
-        {design.newerVersion} (above) after checking it in the configurator, then download.
+        Files are drawn on the current template version only: see what changes in version{" "}
+        {design.newerVersion} (above), open the design on it and save it there, then download.
       </p>
     );
   }

@@ -16,7 +16,7 @@ export function VersionNote({
   templateName: string | null;
   templateVersion: string;
   newerVersion: string | null;
-  /** Offered beside a newer version (e.g. "Move to 1.1.0"). */
+  /** Offered beside a newer version (e.g. "What changes in version 1.1.0?"). */
   action?: ReactNode;
 }) {
   return (
@@ -30,8 +30,9 @@ export function VersionNote({
       {newerVersion ? (
         <Notice tone="caution" title={`Version ${newerVersion} of this template is out`}>
           <p>
-            This design was saved on version {templateVersion}. The configurator opens the current version,
-            which may size or check the part differently: compare its results before you cut metal.
+            This design was saved on version {templateVersion} and stays on it until you save it on a newer
+            one. The new version may size or check the part differently: see what changes, then open the
+            design on it and save it there if the results suit you.
           </p>
           {action ? <div className="mt-2">{action}</div> : null}
         </Notice>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { configuratorHref } from "./configurator-link";
+import { configuratorHref, savedDesignIdOf } from "./configurator-link";
 
 describe("configuratorHref", () => {
   it("puts the units first and every value in the query string", () => {
@@ -20,5 +20,15 @@ describe("configuratorHref", () => {
     const third = 1 / 3;
     const href = configuratorHref("vise-stop", "mm", { t: third });
     expect(Number(new URL(href, "http://x").searchParams.get("t"))).toBe(third);
+  });
+
+  it("names the saved design last, and reads back only a whole positive id", () => {
+    const href = configuratorHref("vise-stop", "mm", { jawWidth: 100 }, { savedDesignId: 42 });
+    expect(href).toBe("/templates/vise-stop?units=mm&jawWidth=100&saved-design=42");
+    expect(savedDesignIdOf(new URL(href, "http://x").searchParams)).toBe(42);
+    for (const bad of ["", "0", "-3", "4.5", "12abc", "99999999999"]) {
+      expect(savedDesignIdOf(new URLSearchParams({ "saved-design": bad }))).toBeNull();
+    }
+    expect(savedDesignIdOf(new URLSearchParams("jawWidth=1"))).toBeNull();
   });
 });
