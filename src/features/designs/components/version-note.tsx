@@ -29,11 +29,18 @@ export function VersionNote({
       </p>
       {newerVersion ? (
         <Notice tone="caution" title={`Version ${newerVersion} of this template is out`}>
-          <p>
-            This design was saved on version {templateVersion} and stays on it until you save it on a newer
-            one. The new version may size or check the part differently: see what changes, then open the
-            design on it and save it there if the results suit you.
-          </p>
+          {action ? (
+            <p>
+              This design was saved on version {templateVersion} and stays on it until you save it on a newer
+              one. The new version may size or check the part differently: see what changes, then open the
+              design on it and save it there if the results suit you.
+            </p>
+          ) : (
+            <p>
+              This design was saved on version {templateVersion}. The current version may size or check the
+              part differently: compare its results before you cut metal.
+            </p>
+          )}
           {action ? <div className="mt-2">{action}</div> : null}
         </Notice>
       ) : null}
