@@ -20,7 +20,7 @@ import { getDocument, OPS } from "pdfjs-dist/legacy/build/pdf.mjs";
 import { evaluateTemplate, type CompiledTemplate, type Evaluation } from "@/engine";
 import { buildPartSheet, layoutAtScale, type SheetCommon } from "@/engine/drawing/partSheet";
 import { annotatePart, baseBox } from "@/engine/drawing/annotations";
-import { formatter } from "@/engine/drawing/format";
+import { formatAngle, formatter } from "@/engine/drawing/format";
 import { engineFits, engineThreads } from "@/engine/drawing/lookups";
 import type { ProjectedPart, ProjectedView, ViewEdge } from "@/engine/drawing/projection";
 import type { ResolvedPart } from "@/engine/parts/features";
@@ -497,3 +497,32 @@ function distanceToSegment(a: { x: number; y: number }, b: { x: number; y: numbe
   const t = Math.max(0, Math.min(1, ((c.x - a.x) * dx + (c.y - a.y) * dy) / (dx * dx + dy * dy)));
   return Math.hypot(a.x + t * dx - c.x, a.y + t * dy - c.y);
 }
+
+describe("the eccentric bore's angular position (ISO 129-1 angular dimension)", () => {
+  // The angle between the bore's offset and the nearest principal centre line of the cam, which no
+  // quarter-turn of the view changes: min over k of |θ − k·90°|.
+  const cam = () => ev.parts.find((p) => p.id === "cam")!;
+  const expected = () => {
+    const bore = cam().features.find((f) => f.kind === "eccentric-bore")!;
+    const a = bore.kind === "eccentric-bore" ? (bore.angleDeg ?? 0) : 0;
+    const r = ((a % 90) + 90) % 90;
+    return formatAngle(Math.min(r, 90 - r));
+  };
+
+  it("the cam sheet gives the angle in degrees as a dimension, not in words", () => {
+    const t = pack.texts.find((x) => x.includes("CAM-VISE-STOP-CAM") && !x.includes("CAM-VISE-STOP-ASSEMBLY"))!;
+    expect(expected()).not.toBe("0°");
+    expect(t).toContain(expected());
+    expect(t.join(" ")).not.toMatch(/clockwise/);
+  });
+
+  it("SVG and DXF draw it from the same model: an arc on the dimension layer and the value in degrees", async () => {
+    const svg = (await buildExport(request({ format: "svg", part: "cam" }), { kernel: memoKernel, inWorker: false })).body.toString("utf8");
+    expect(svg).toContain(`>${expected()}<`);
+    expect(svg).toMatch(/<path d="[^"]* A [^"]*" id="dimension"/);
+    const dxf = new DxfParser().parseSync((await buildExport(request({ format: "dxf", part: "cam" }), { kernel: memoKernel, inWorker: false })).body.toString("utf8"))!;
+    expect(dxf.entities.some((e) => e.type === "ARC" && e.layer === "DIMENSIONS")).toBe(true);
+    const texts = dxf.entities.filter((e) => e.type === "TEXT").map((e) => (e as unknown as { text: string }).text);
+    expect(texts).toContain(expected().replace("°", "%%d"));
+  });
+});

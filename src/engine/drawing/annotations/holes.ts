@@ -115,13 +115,16 @@ export function annotateEccentricBore(f: EccentricBoreFeature, ctx: AnnotateCont
   const requests = roundFeatureRequests(ctx, extra, at, d, f.diameter / 2, outer, length, lines);
   const deg = ((((f.angleDeg ?? 0) % 360) + 360) % 360);
   if (Math.abs(deg % 90) < 1e-6 || Math.abs((deg % 90) - 90) < 1e-6) return requests;
-  // Off a centre line: the offset and its angle read better than two small coordinates. Seen from the
-  // right-hand end (+z) the part's +x axis is the upper centre line and +y points left.
+  // Off a centre line: polar location, the offset (in the callout) and its angle as a real angular
+  // dimension in the end view. Seen from the right-hand end (+z) the part's +x axis is the upper centre
+  // line and +y points left; the words are only the fallback for a drawing without an end view.
   const cw = -(((deg + 180) % 360) - 180);
   const words = `${formatAngle(Math.abs(cw))} ${cw > 0 ? "clockwise" : "anticlockwise"} from the upper centre line (seen from the right-hand end)`;
-  return requests
-    .filter((r) => !(r.kind === "linear" && r.role === "location"))
-    .map((r) => (r.kind === "callout" ? { ...r, lines: r.lines.flatMap((l) => (l.startsWith("offset ") ? [l, words] : [l])) } : r));
+  const outlineRadiusMm = Math.max(ctx.bbox.max.x, ctx.bbox.max.y);
+  return [
+    ...requests.filter((r) => !(r.kind === "linear" && r.role === "location")),
+    { kind: "angular", feature: extra.name, vertex: { x: 0, y: 0, z }, axis: "z", through: at, outlineRadiusMm, fallbackLine: words, prefer: entryViews(d) },
+  ];
 }
 
 /** Rounds away floating noise from cos/sin (cos 90° = 6e-17). */

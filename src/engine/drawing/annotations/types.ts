@@ -57,7 +57,25 @@ export interface ThreadMarkRequest {
   minorMm: number;
 }
 
-export type AnnotationRequest = LinearRequest | CalloutRequest | ThreadMarkRequest;
+/**
+ * An angular dimension (ISO 129-1): the angle at `vertex`, in the plane across `axis`, between the nearest
+ * principal centre line of the view and the line from the vertex through `through` (a bore's centre). Drawn
+ * in a view that looks along `axis`; where no such view is drawn, `fallbackLine` joins the feature's
+ * callout so the angle is still stated.
+ */
+export interface AngularRequest {
+  kind: "angular";
+  feature: string;
+  vertex: Point3;
+  axis: Axis;
+  through: Point3;
+  /** The outline the arc must clear (the part's outer radius about the vertex), model mm. */
+  outlineRadiusMm: number;
+  fallbackLine: string;
+  prefer: SignedAxis[];
+}
+
+export type AnnotationRequest = LinearRequest | CalloutRequest | ThreadMarkRequest | AngularRequest;
 
 /** ISO metric thread data an annotator needs (from the thread calculator). */
 export interface ThreadInfo {

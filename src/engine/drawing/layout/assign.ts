@@ -6,7 +6,7 @@
  * shown in another view keeps its own dimension there, so each feature is located where it is seen.
  * Thread marks go to every view.
  */
-import type { AnnotationRequest, CalloutRequest, LinearRequest, ThreadMarkRequest } from "../annotations/types";
+import type { AngularRequest, AnnotationRequest, CalloutRequest, LinearRequest, ThreadMarkRequest } from "../annotations/types";
 import type { ProjectedView, SignedAxis, ViewName } from "../projection";
 import { signedAxisOf } from "../projection";
 
@@ -14,6 +14,7 @@ export interface ViewAnnotations {
   linear: LinearRequest[];
   callouts: CalloutRequest[];
   threads: ThreadMarkRequest[];
+  angular: AngularRequest[];
 }
 
 function pick(views: ProjectedView[], prefer: SignedAxis[], canShow: (v: ProjectedView) => boolean): ProjectedView | undefined {
@@ -32,10 +33,18 @@ function pick(views: ProjectedView[], prefer: SignedAxis[], canShow: (v: Project
 const key = (view: ViewName, r: LinearRequest) => `${view}:${r.axis}:${Math.min(r.a, r.b).toFixed(4)}:${Math.max(r.a, r.b).toFixed(4)}`;
 
 export function assignToViews(requests: AnnotationRequest[], views: ProjectedView[]): { byView: Map<ViewName, ViewAnnotations>; unplaced: AnnotationRequest[] } {
-  const byView = new Map<ViewName, ViewAnnotations>(views.map((v) => [v.name, { linear: [], callouts: [], threads: [] }]));
+  const byView = new Map<ViewName, ViewAnnotations>(views.map((v) => [v.name, { linear: [], callouts: [], threads: [], angular: [] }]));
   const unplaced: AnnotationRequest[] = [];
   const seen = new Set<string>();
+  const unseenAngles: AngularRequest[] = [];
   for (const r of requests) {
+    if (r.kind === "angular") {
+      // Only a view looking along the axis shows the angle true.
+      const v = pick(views, r.prefer, (x) => Math.abs(x.towardViewer[r.axis]) > 0.5);
+      if (v && Math.abs(v.towardViewer[r.axis]) > 0.5) byView.get(v.name)!.angular.push(r);
+      else unseenAngles.push(r);
+      continue;
+    }
     if (r.kind === "thread-mark") {
       for (const v of views) byView.get(v.name)!.threads.push(r);
       continue;
@@ -55,6 +64,16 @@ export function assignToViews(requests: AnnotationRequest[], views: ProjectedVie
     const v = pick(views, axisPrefer, () => true);
     if (!v) unplaced.push(r);
     else byView.get(v.name)!.callouts.push(r);
+  }
+  // An angle no drawn view shows true is stated in words in its feature's callout (a copy: the same
+  // requests are laid out again at other scales).
+  for (const a of unseenAngles) {
+    const holder = [...byView.values()].find((ann) => ann.callouts.some((c) => c.feature === a.feature));
+    if (!holder) {
+      unplaced.push(a);
+      continue;
+    }
+    holder.callouts = holder.callouts.map((c) => (c.feature === a.feature ? { ...c, lines: [...c.lines, a.fallbackLine] } : c));
   }
   return { byView, unplaced };
 }
