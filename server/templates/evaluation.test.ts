@@ -27,7 +27,8 @@ describe("evaluateCached", () => {
     expect(evaluationKey(stop, {})).toBe(evaluationKey(stop, { units: "mm", parameters: {} }));
   });
 
-  it("freezes what it keeps, so no caller can spoil the next request's answer", () => {
+  it("under test, freezes what it keeps, so a caller that changed a shared answer would fail its tests", () => {
+    expect(process.env.NODE_ENV).toBe("test");
     const e = evaluateCached(stop, {});
     expect(Object.isFrozen(e)).toBe(true);
     expect(Object.isFrozen(e.checks)).toBe(true);

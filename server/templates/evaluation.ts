@@ -17,6 +17,8 @@ import { badRequest } from "@server/lib/errors";
 /** Configurations kept per template (an answer with its parts is some tens of kB). */
 const PER_TEMPLATE = 64;
 
+const FREEZE = process.env.NODE_ENV === "test";
+
 const caches = new WeakMap<CompiledTemplate, LRUCache<string, Evaluation>>();
 
 /** JSON with object keys sorted, so `{a,b}` and `{b,a}` give one key. */
@@ -44,7 +46,7 @@ export function evaluationKey(compiled: CompiledTemplate, input: EvaluateInput):
 }
 
 /**
- * {@link evaluateTemplate} with recent answers remembered. The answer is frozen: read it, never change it.
+ * {@link evaluateTemplate} with recent answers remembered. The answer is shared: read it, never change it.
  * Refusals (bad parameters) are not cached; they throw as the engine throws them.
  */
 export function evaluateCached(compiled: CompiledTemplate, input: EvaluateInput): Evaluation {
@@ -56,7 +58,8 @@ export function evaluateCached(compiled: CompiledTemplate, input: EvaluateInput)
   const key = evaluationKey(compiled, input);
   const hit = cache.get(key);
   if (hit) return hit;
-  const evaluation = deepFreeze(evaluateTemplate(compiled, input));
+  const evaluation = evaluateTemplate(compiled, input);
+  if (FREEZE) deepFreeze(evaluation);
   cache.set(key, evaluation);
   return evaluation;
 }

@@ -43,21 +43,13 @@ const RECENT_RESULTS = 16;
 
 /**
  * Keeps a calculator result for its inputs, oldest out first. Calculators are pure, so the same inputs
- * give the same result; the result is frozen because later evaluations share it.
+ * give the same result. Later evaluations share the object: nothing may change it (the server's tests
+ * run with every kept evaluation frozen, so a change would throw there).
  */
 export function rememberResult(analysis: CompiledAnalysis, key: string, result: Record<string, unknown>): Readonly<Record<string, unknown>> {
-  const frozen = deepFreeze(result);
   if (analysis.recent.size >= RECENT_RESULTS) analysis.recent.delete(analysis.recent.keys().next().value!);
-  analysis.recent.set(key, frozen);
-  return frozen;
-}
-
-function deepFreeze<T>(value: T): T {
-  if (value !== null && typeof value === "object" && !Object.isFrozen(value)) {
-    Object.freeze(value);
-    for (const v of Object.values(value)) deepFreeze(v);
-  }
-  return value;
+  analysis.recent.set(key, result);
+  return result;
 }
 
 export interface CompiledCheck {
