@@ -16,6 +16,8 @@ import { axisVector, type ProjectedView } from "../projection";
 import { viewFrame } from "../views";
 import { assignToViews } from "./assign";
 import { angularGeometry } from "./angular";
+import { segmentHitsBox } from "./geometry";
+import { textBox } from "./shapes";
 import { layoutView } from "./viewLayout";
 
 const cam = (angleDeg: number): ResolvedPart => ({
@@ -87,8 +89,15 @@ describe("angular dimension of an eccentric bore (ISO 129-1)", () => {
       const want = { x: arc.radius * Math.cos((deg * Math.PI) / 180), y: arc.radius * Math.sin((deg * Math.PI) / 180) };
       expect(tips.some((t) => Math.hypot(t.x - want.x, t.y - want.y) < 1e-3), `tip at ${deg}°`).toBe(true);
     }
-    const text = shapes.find((s) => s.type === "text" && s.text === "15°");
-    expect(text?.type === "text" && Math.hypot(text.at.x, text.at.y + text.heightMm / 2)).toBeGreaterThan(arc.radius);
+    const text = shapes.find((s): s is Extract<SheetShape, { type: "text" }> => s.type === "text" && s.text === "15°")!;
+    expect(Math.hypot(text.at.x, text.at.y + text.heightMm / 2)).toBeGreaterThan(arc.radius);
+    // ISO 129-1: no line crosses the dimension value, at this scale or full size.
+    for (const sc of [scale, 1]) {
+      const all = sc === scale ? shapes : layoutView(view("right"), byView.get("right")!, sc).shapes;
+      const value = all.find((s): s is Extract<SheetShape, { type: "text" }> => s.type === "text" && s.text === "15°")!;
+      const box = textBox(value);
+      for (const l of all) if (l.type === "line") expect(segmentHitsBox(l.from, l.to, box), `${l.layer} line through "15°" at ${sc}:1`).toBe(false);
+    }
   });
 
   it("without an end view the angle is stated in the callout instead", () => {

@@ -4,7 +4,7 @@
  * Used for a bore located by polar coordinates: the legs are the part's principal centre line nearest the
  * bore and the line of centres from the vertex through the bore's centre (drawn as a centre line across
  * the part), each continued as a thin extension line beyond the outline to just past the arc
- * (ISO 129-1: extension lines 2 mm past the dimension line). The arc runs 8 mm outside the outline, the
+ * (ISO 129-1: extension lines 2 mm past the dimension line); the value sits beyond their ends. The arc runs 8 mm outside the outline, the
  * first dimension row of linear dimensions; arrowheads go outside the legs when the arc is too short.
  */
 import type { AngularRequest } from "../annotations/types";
@@ -58,11 +58,11 @@ export function layoutAngular(view: ProjectedView, requests: AngularRequest[], s
     const s = inside ? 1 : -1;
     shapes.push(arrowhead(at(a0, arcR), s * Math.sin(rad(a0)), -s * Math.cos(rad(a0))));
     shapes.push(arrowhead(at(a1, arcR), -s * Math.sin(rad(a1)), s * Math.cos(rad(a1))));
-    // The value upright, just outside the arc at its middle.
+    // The value upright, outside the arc at its middle, beyond the ends of the legs so no line crosses it.
     const text = formatAngle(g.valueDeg);
     const w = textWidthMm(text, TEXT_H);
     const mid = (a0 + a1) / 2;
-    const reach = arcR + TEXT_GAP_MM + Math.abs(Math.cos(rad(mid))) * (w / 2) + Math.abs(Math.sin(rad(mid))) * (TEXT_H / 2);
+    const reach = legEnd + TEXT_GAP_MM + Math.abs(Math.cos(rad(mid))) * (w / 2) + Math.abs(Math.sin(rad(mid))) * (TEXT_H / 2);
     const centre = at(mid, reach);
     shapes.push({ type: "text", layer: "dimension", role: "dimension", at: sheetPoint(centre.x, centre.y - TEXT_H / 2), text, heightMm: TEXT_H, align: "centre" });
   }

@@ -106,4 +106,16 @@ describe("template notes through the evaluation", () => {
     const inch = partNotes({ part: ev.parts[0]!, fmt: formatter("in"), generalTolerance: "m", failingChecks: [] }).join("\n");
     expect(inch).toContain("break sharp edges about .008 × 45°");
   });
+
+  it("the heat-treatment remark keeps the grade's capitals (O1, not o1)", () => {
+    const ev = evaluateTemplate(template("mm", {}), {});
+    const notes = partNotes({
+      part: ev.parts[0]!,
+      fmt: formatter("mm"),
+      generalTolerance: "m",
+      failingChecks: [],
+      material: { name: "Tool steel (O1, annealed)", hardenable: true },
+    }).join("\n");
+    expect(notes).toContain("tool steel (O1, annealed) can be hardened");
+  });
 });

@@ -29,6 +29,11 @@ function sentence(s: string): string {
   return /[.!?:;)]$/.test(t) ? t : `${t}.`;
 }
 
+/** "Tool steel (O1, annealed)" → "tool steel (O1, annealed)": grades and acronyms keep their capitals. */
+function lowerFirst(s: string): string {
+  return /^[A-Z][a-z]/.test(s) ? s[0]!.toLowerCase() + s.slice(1) : s;
+}
+
 function features(part: ResolvedPart): ResolvedFeature[] {
   return part.features.flatMap((f): ResolvedFeature[] => (f.kind === "pattern-linear" || f.kind === "pattern-circular" ? [f, f.feature] : [f]));
 }
@@ -54,7 +59,7 @@ export function partNotes(input: PartNoteInput): string[] {
   if (part.finish) notes.push(`Finish: ${sentence(part.finish)}`);
   if (part.heatTreatment) notes.push(`Heat treatment: ${sentence(part.heatTreatment)}`);
   else if (input.material?.hardenable) {
-    notes.push(`Heat treatment: none specified; ${input.material.name.toLowerCase()} can be hardened and tempered where wear calls for it.`);
+    notes.push(`Heat treatment: none specified; ${lowerFirst(input.material.name)} can be hardened and tempered where wear calls for it.`);
   }
   for (const n of own) if (!notes.includes(sentence(n))) notes.push(sentence(n));
   if (input.failingChecks.length > 0) notes.push(`Template checks failing: ${input.failingChecks.join("; ")}. Do not make this part until they are resolved.`);
