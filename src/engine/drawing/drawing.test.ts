@@ -199,6 +199,23 @@ describe("annotations: size and location of every feature (ISO 129-1)", () => {
   it("a step: its size from the face it opens on (5 into y, 5 down from the top)", () => {
     expect(linear("rebate").map((r) => `${r.axis}=${r.text}`).sort()).toEqual(["y=5", "z=5"]);
   });
+  it("a staircase of steps: each tread edge from the datum once (16, 32, 48), no chain repeating an edge (ISO 129-1)", () => {
+    const heel: ResolvedPart = {
+      id: "heel",
+      name: "Heel",
+      material: "mild-steel",
+      datums: { x: "min", y: "min", z: "min" },
+      features: [
+        { kind: "block", size: { x: 64, y: 50, z: 36 } },
+        { kind: "step", id: "t1", from: { x: 0, y: 0, z: 12 }, to: { x: 16, y: 50, z: 36 } },
+        { kind: "step", id: "t2", from: { x: 16, y: 0, z: 20 }, to: { x: 32, y: 50, z: 36 } },
+        { kind: "step", id: "t3", from: { x: 32, y: 0, z: 28 }, to: { x: 48, y: 50, z: 36 } },
+      ],
+    };
+    const x = annotatePart(context(heel)).filter((r): r is LinearRequest => r.kind === "linear" && r.axis === "x" && r.feature !== "block 1");
+    const spans = [...new Set(x.map((r) => `${Math.min(r.a, r.b)}-${Math.max(r.a, r.b)}`))].sort();
+    expect(spans).toEqual(["0-16", "0-32", "0-48"]);
+  });
   it("a chamfer gets a callout", () => {
     expect(callouts("edges")[0]!.lines[0]).toBe("chamfer 0.5 × 45°, all edges of top face");
   });

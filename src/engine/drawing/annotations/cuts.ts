@@ -135,7 +135,12 @@ export function annotateStep(f: StepFeature, ctx: AnnotateContext, name: string)
     // Best: the view looking along an axis the step runs right through (it shows the step's profile).
     const prefer = [...full, ...partial.filter((a) => a !== axis)].filter((a) => a !== axis).flatMap((a) => bothSides(ctx, a));
     const edge = (c: number): OriginRegion => spanRegion({ ...lo, [axis]: c }, { ...hi, [axis]: c });
-    out.push(...extentDims(ctx, name, axis, lo[axis], hi[axis], edge, prefer));
+    const inside = insideEdges(ctx, axis, lo[axis], hi[axis]);
+    // A step between two others (a tread of a staircase) shares each edge with a neighbour: both edges
+    // from the datum (parallel dimensioning, ISO 129-1) give each edge once, where location + width
+    // would repeat a neighbour's edge as a chain and over-dimension the part.
+    if (inside.lo && inside.hi) for (const c of [lo[axis], hi[axis]]) out.push(...locationFromDatum(ctx, name, axis, c, edge(c), prefer));
+    else out.push(...extentDims(ctx, name, axis, lo[axis], hi[axis], edge, prefer));
   }
   return out;
 }

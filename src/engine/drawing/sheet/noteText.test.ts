@@ -66,9 +66,9 @@ describe("note lengths in the sheet's units", () => {
 
 describe("template notes through the evaluation", () => {
   const notes = {
-    sheet: ["Break all sharp edges {0.2:len}–{0.5:len} × 45° unless shown.", "Dimensions in millimetres unless stated."],
+    sheet: ["Dimensions in millimetres unless stated.", "Remove all burrs; break sharp edges.", "Stamp the part number {3:len} high on the end."],
     assembly: ["Shim to {fitGap:len} end float."],
-    part: ["Dial the offset within {0.01:len}.", "Running gap {fitGap:len}; mark {{LH}} on the end."],
+    part: ["Dial the offset within {0.01:len}.", "Running gap {fitGap:len}; mark {{LH}} on the end.", "Break all sharp edges {0.2:len}–{0.5:len} × 45° unless shown."],
   };
 
   it("an mm template's notes read in mm on an mm drawing and in decimal inches on an inch drawing", () => {
@@ -85,8 +85,13 @@ describe("template notes through the evaluation", () => {
     expect(inch).toContain("Running gap .0008; mark {LH} on the end.");
     expect(inch).toContain("Break all sharp edges .008–.020 × 45° unless shown.");
     expect(inch).toContain("Dimensions in inches.");
+    // 3 mm = 0.118 in.
+    expect(mm).toContain("Stamp the part number 3 high on the end.");
+    expect(inch).toContain("Stamp the part number .118 high on the end.");
     // The template's own units note is replaced by the drawing's.
     expect(inch).not.toContain("millimetres");
+    // One edge note: the part's own, with its sizes, stands in for the template's general one.
+    expect(render("mm").filter((n) => /sharp edge|burr/i.test(n))).toHaveLength(1);
     expect(renderNote(ev.drawingNotes.assembly[0]!, formatter("in"))).toBe("Shim to .0008 end float.");
   });
 

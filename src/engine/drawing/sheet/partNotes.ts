@@ -29,6 +29,8 @@ function sentence(s: string): string {
   return /[.!?:;)]$/.test(t) ? t : `${t}.`;
 }
 
+const EDGE_NOTE = /sharp edge|burr/i;
+
 /** "Tool steel (O1, annealed)" → "tool steel (O1, annealed)": grades and acronyms keep their capitals. */
 function lowerFirst(s: string): string {
   return /^[A-Z][a-z]/.test(s) ? s[0]!.toLowerCase() + s.slice(1) : s;
@@ -50,12 +52,17 @@ export function partNotes(input: PartNoteInput): string[] {
   if (hasFit) notes.push("Fits (e.g. H7) to ISO 286-1/-2; check reamed and bored sizes with a gauge.");
   const hasThread = all.some((f) => f.kind === "thread");
   if (hasThread) notes.push("Threads ISO metric (ISO 261/965-1), tolerance class 6H internal, 6g external unless stated.");
-  const sheetOwn = (input.sheetNotes ?? []).map((n) => renderNote(n, fmt)).filter((n) => !/dimensions in|ISO 2768|general tolerance/i.test(n));
-  const own = [...(part.drawing?.notes ?? []).map((n) => renderNote(n, fmt)), ...sheetOwn]
+  const partOwn = (part.drawing?.notes ?? []).map((n) => renderNote(n, fmt));
+  // A part's own edge note (with its sizes) stands in for the template's general one.
+  const partEdges = partOwn.some((n) => EDGE_NOTE.test(n));
+  const sheetOwn = (input.sheetNotes ?? [])
+    .map((n) => renderNote(n, fmt))
+    .filter((n) => !/dimensions in|ISO 2768|general tolerance/i.test(n) && !(partEdges && EDGE_NOTE.test(n)));
+  const own = [...partOwn, ...sheetOwn]
     .map((n) => n.trim())
     .filter(Boolean);
   // The template's own edge note replaces the generated one.
-  if (!own.some((n) => /sharp edge|burr/i.test(n))) notes.push(`Remove burrs and break sharp edges about ${fmt.length(0.2)} × 45° unless shown otherwise.`);
+  if (!own.some((n) => EDGE_NOTE.test(n))) notes.push(`Remove burrs and break sharp edges about ${fmt.length(0.2)} × 45° unless shown otherwise.`);
   if (part.finish) notes.push(`Finish: ${sentence(part.finish)}`);
   if (part.heatTreatment) notes.push(`Heat treatment: ${sentence(part.heatTreatment)}`);
   else if (input.material?.hardenable) {
