@@ -216,6 +216,21 @@ describe("annotations: size and location of every feature (ISO 129-1)", () => {
     const spans = [...new Set(x.map((r) => `${Math.min(r.a, r.b)}-${Math.max(r.a, r.b)}`))].sort();
     expect(spans).toEqual(["0-16", "0-32", "0-48"]);
   });
+  it("steps that share no edge keep their widths as sizes (an opening's width is the functional size)", () => {
+    const stirrup: ResolvedPart = {
+      id: "stirrup",
+      name: "Stirrup",
+      material: "mild-steel",
+      datums: { x: "min", y: "min", z: "min" },
+      features: [
+        { kind: "block", size: { x: 16, y: 78, z: 80 } },
+        { kind: "step", id: "opening", from: { x: 0, y: 8, z: 6 }, to: { x: 16, y: 70, z: 70 } },
+        { kind: "step", id: "lips", from: { x: 0, y: 13, z: 0 }, to: { x: 16, y: 65, z: 6 } },
+      ],
+    };
+    const y = annotatePart(context(stirrup)).filter((r): r is LinearRequest => r.kind === "linear" && r.axis === "y" && r.feature !== "block 1");
+    expect(y.filter((r) => r.role === "size").map((r) => r.text).sort()).toEqual(["52", "62"]);
+  });
   it("a chamfer gets a callout", () => {
     expect(callouts("edges")[0]!.lines[0]).toBe("chamfer 0.5 × 45°, all edges of top face");
   });

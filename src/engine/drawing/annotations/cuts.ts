@@ -122,6 +122,17 @@ export function annotatePocket(f: PocketFeature, ctx: AnnotateContext, extra: An
   return out;
 }
 
+/** Does another step of the part end where this one does along `axis`? */
+function sharesEdge(ctx: AnnotateContext, f: StepFeature, axis: Axis, lo: number, hi: number): boolean {
+  return ctx.part.features.some(
+    (g) =>
+      g !== f &&
+      g.kind === "step" &&
+      g.when !== false &&
+      [g.from[axis], g.to[axis]].some((c) => Math.abs(c - lo) < TOL || Math.abs(c - hi) < TOL),
+  );
+}
+
 export function annotateStep(f: StepFeature, ctx: AnnotateContext, name: string): AnnotationRequest[] {
   const lo = { x: Math.min(f.from.x, f.to.x), y: Math.min(f.from.y, f.to.y), z: Math.min(f.from.z, f.to.z) };
   const hi = { x: Math.max(f.from.x, f.to.x), y: Math.max(f.from.y, f.to.y), z: Math.max(f.from.z, f.to.z) };
@@ -136,11 +147,13 @@ export function annotateStep(f: StepFeature, ctx: AnnotateContext, name: string)
     const prefer = [...full, ...partial.filter((a) => a !== axis)].filter((a) => a !== axis).flatMap((a) => bothSides(ctx, a));
     const edge = (c: number): OriginRegion => spanRegion({ ...lo, [axis]: c }, { ...hi, [axis]: c });
     const inside = insideEdges(ctx, axis, lo[axis], hi[axis]);
-    // A step between two others (a tread of a staircase) shares each edge with a neighbour: both edges
-    // from the datum (parallel dimensioning, ISO 129-1) give each edge once, where location + width
-    // would repeat a neighbour's edge as a chain and over-dimension the part.
-    if (inside.lo && inside.hi) for (const c of [lo[axis], hi[axis]]) out.push(...locationFromDatum(ctx, name, axis, c, edge(c), prefer));
-    else out.push(...extentDims(ctx, name, axis, lo[axis], hi[axis], edge, prefer));
+    // A tread of a staircase shares an edge with its neighbour: both edges from the datum (parallel
+    // dimensioning, ISO 129-1) give each edge once, where location + width would repeat the shared edge
+    // as a chain and over-dimension the part. A step sharing no edge keeps its width as a size (often
+    // the functional one: an opening that fits another part).
+    if (inside.lo && inside.hi && sharesEdge(ctx, f, axis, lo[axis], hi[axis])) {
+      for (const c of [lo[axis], hi[axis]]) out.push(...locationFromDatum(ctx, name, axis, c, edge(c), prefer));
+    } else out.push(...extentDims(ctx, name, axis, lo[axis], hi[axis], edge, prefer));
   }
   return out;
 }
