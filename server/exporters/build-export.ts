@@ -262,7 +262,8 @@ function assemblySheet(pack: Pack, projected: ProjectedAssembly, n: number, tota
   const materialNames = Object.fromEntries(pack.parts.map((p) => [p.id, materialInfo(p.material)?.name ?? p.material]));
   const mass = pack.req.evaluation.partSummaries.reduce((s, p) => (p.massKg == null ? s : s + p.massKg * p.quantity), 0);
   const { template, evaluation, units } = pack.req;
-  const madeToSuit = madeToSuitNote(template.parameters, evaluation.parameters, units);
+  // In mm whatever units the evaluation was worked in (a saved design is evaluated in its template's own).
+  const madeToSuit = madeToSuitNote(template.parameters, evaluation.parametersMm, units);
   const extraNotes = [...(madeToSuit ? [escapeNoteText(madeToSuit)] : []), ...(evaluation.drawingNotes?.assembly ?? (template.assembly?.notes ?? []).map(escapeNoteText))];
   return buildAssemblySheet({ ...pack.common, parts: pack.parts, projected, materialNames, totalMassKg: mass, sheetNumber: n, sheetCount: total, extraNotes });
 }

@@ -20,10 +20,10 @@ describe("made-to-suit note on the assembly sheet", () => {
     );
   });
 
-  it("prints inch values in decimal inches (exactly 25.4 mm per inch: 127 mm = 5 in)", () => {
-    expect(madeToSuitNote(parameters, { jawWidth: 127 / 25.4, jawThickness: 1.0433 }, "in")).toBe(
-      "Made to suit: Jaw width 5 in, Jaw thickness 1.0433 in.",
-    );
+  it("prints inch sheets in decimal inches to three places (exactly 25.4 mm per inch: 127 mm = 5 in, 26.5 mm = 1.0433 in)", () => {
+    expect(madeToSuitNote(parameters, { jawWidth: 127, jawThickness: 26.5 }, "in")).toBe("Made to suit: Jaw width 5.000 in, Jaw thickness 1.043 in.");
+    // Under an inch without a leading zero (ASME Y14.5 §1.6.2): 20 mm = .787 in.
+    expect(madeToSuitNote(parameters, { jawWidth: 20 }, "in")).toBe("Made to suit: Jaw width .787 in.");
   });
 
   it("says nothing for a template with no machine measurements", () => {
