@@ -230,6 +230,17 @@ describe("annotations: size and location of every feature (ISO 129-1)", () => {
     };
     const y = annotatePart(context(stirrup)).filter((r): r is LinearRequest => r.kind === "linear" && r.axis === "y" && r.feature !== "block 1");
     expect(y.filter((r) => r.role === "size").map((r) => r.text).sort()).toEqual(["52", "62"]);
+    // A pair of side grooves over the same height is no staircase: each keeps its height (8) as a size.
+    const grooved: ResolvedPart = {
+      ...stirrup,
+      features: [
+        { kind: "block", size: { x: 60, y: 50, z: 45 } },
+        { kind: "step", id: "left", from: { x: 0, y: 0, z: 10 }, to: { x: 5, y: 50, z: 18 } },
+        { kind: "step", id: "right", from: { x: 55, y: 0, z: 10 }, to: { x: 60, y: 50, z: 18 } },
+      ],
+    };
+    const z = annotatePart(context(grooved)).filter((r): r is LinearRequest => r.kind === "linear" && r.axis === "z" && r.feature !== "block 1");
+    expect(z.filter((r) => r.role === "size").map((r) => r.text)).toContain("8");
   });
   it("a chamfer gets a callout", () => {
     expect(callouts("edges")[0]!.lines[0]).toBe("chamfer 0.5 × 45°, all edges of top face");

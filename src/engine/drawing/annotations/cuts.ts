@@ -122,15 +122,18 @@ export function annotatePocket(f: PocketFeature, ctx: AnnotateContext, extra: An
   return out;
 }
 
-/** Does another step of the part end where this one does along `axis`? */
+/**
+ * Is this step a tread of a staircase along `axis`: does another step begin where this one ends (or end
+ * where it begins)? Steps over the same range (a pair of side grooves) are not.
+ */
 function sharesEdge(ctx: AnnotateContext, f: StepFeature, axis: Axis, lo: number, hi: number): boolean {
-  return ctx.part.features.some(
-    (g) =>
-      g !== f &&
-      g.kind === "step" &&
-      g.when !== false &&
-      [g.from[axis], g.to[axis]].some((c) => Math.abs(c - lo) < TOL || Math.abs(c - hi) < TOL),
-  );
+  const near = (a: number, b: number) => Math.abs(a - b) < TOL;
+  return ctx.part.features.some((g) => {
+    if (g === f || g.kind !== "step" || g.when === false) return false;
+    const glo = Math.min(g.from[axis], g.to[axis]);
+    const ghi = Math.max(g.from[axis], g.to[axis]);
+    return near(ghi, lo) || near(glo, hi);
+  });
 }
 
 export function annotateStep(f: StepFeature, ctx: AnnotateContext, name: string): AnnotationRequest[] {

@@ -17,7 +17,8 @@ const TEXT_H = TEXT_HEIGHTS.normal;
 const LINE_PITCH_MM = 4;
 const FIRST_GAP_MM = 6;
 const SHOULDER_MM = 2;
-const MAX_WIDTH_MM = 62;
+// Wide enough for a fitted hole with limits and depth in inches on one line (about 64 mm at 2.5 mm).
+const MAX_WIDTH_MM = 72;
 
 interface PlacedCallout {
   text: Box;
