@@ -18,6 +18,8 @@ import { engineFits, engineThreads } from "./lookups";
 import { axisVector, type ViewName } from "./projection";
 import { chooseScale } from "./scale";
 import { projectionSymbol } from "./sheet/projectionSymbol";
+import { titleBlock } from "./sheet/titleBlock";
+import { textWidthMm } from "./text/measure";
 import { sheetPoint } from "./model";
 import { viewFrame } from "./views";
 
@@ -264,5 +266,35 @@ describe("annotations: size and location of every feature (ISO 129-1)", () => {
     expect(r.filter((x) => x.axis === "x").map((x) => x.text)).toEqual(["Ø12", "Ø8", "M4"]);
     // Shoulders at 3 and 12 from z = 0, overall 26, thread length 10 (shorter than its 14 mm step).
     expect(r.filter((x) => x.axis === "z").map((x) => x.text).sort()).toEqual(["10", "12", "26", "3"]);
+  });
+});
+
+describe("title block (ISO 7200)", () => {
+  const fields = {
+    title: "Strap clamp with heel block: assembly",
+    documentType: "Assembly drawing",
+    drawingNumber: "STRAP-CLAMP-ASSEMBLY",
+    revision: "1.0.0",
+    owner: "Jigwright",
+    material: "see parts list",
+    mass: "1.5 kg",
+    generalTolerance: "ISO 2768-m",
+    units: "mm",
+    scale: "1:1",
+    projection: "first" as const,
+    drawnBy: "A. Fitter",
+    date: "2026-12-01",
+    approved: "—",
+    sheet: "1 of 10",
+  };
+  it("a long title is lettered smaller (ISO 3098 3.5 mm) rather than cut short, and fits its 110 mm field", () => {
+    const title = titleBlock(fields, sheetPoint(287, 10)).find((s) => s.type === "text" && s.role === "title" && s.text.startsWith("Strap"));
+    expect(title?.type === "text" && title.text).toBe(fields.title);
+    expect(title?.type === "text" && title.heightMm).toBe(3.5);
+    expect(title?.type === "text" && textWidthMm(title.text, title.heightMm, "bold")).toBeLessThanOrEqual(107);
+  });
+  it("a short title keeps the 5 mm lettering", () => {
+    const title = titleBlock({ ...fields, title: "Body" }, sheetPoint(287, 10)).find((s) => s.type === "text" && s.text === "Body");
+    expect(title?.type === "text" && title.heightMm).toBe(5);
   });
 });

@@ -6,7 +6,7 @@
  */
 import type { ProjectionMethod } from "../layout/arrange";
 import { sheetPoint, TEXT_HEIGHTS, type SheetPoint, type SheetShape, type SheetText } from "../model";
-import { textWidthMm } from "../text/measure";
+import { textWidthMm, type FontWeight } from "../text/measure";
 import { projectionSymbol } from "./projectionSymbol";
 
 export const TITLE_BLOCK_WIDTH_MM = 180;
@@ -44,11 +44,20 @@ interface Cell {
 }
 
 /** Shortens text with an ellipsis until it fits `widthMm` at `heightMm`. */
-export function fitText(text: string, widthMm: number, heightMm: number): string {
-  if (textWidthMm(text, heightMm) <= widthMm) return text;
+export function fitText(text: string, widthMm: number, heightMm: number, weight?: FontWeight): string {
+  if (textWidthMm(text, heightMm, weight) <= widthMm) return text;
   let t = text;
-  while (t.length > 1 && textWidthMm(`${t}…`, heightMm) > widthMm) t = t.slice(0, -1);
+  while (t.length > 1 && textWidthMm(`${t}…`, heightMm, weight) > widthMm) t = t.slice(0, -1);
   return `${t.trimEnd()}…`;
+}
+
+/**
+ * The lettering height for a value: its own, or the next smaller ISO 3098 height when that makes a long
+ * title fit whole (a title is better smaller than cut short).
+ */
+function fittingHeight(text: string, widthMm: number, heightMm: number, weight?: FontWeight): number {
+  if (heightMm <= TEXT_HEIGHTS.large || textWidthMm(text, heightMm, weight) <= widthMm) return heightMm;
+  return TEXT_HEIGHTS.large;
 }
 
 /** The title block with its bottom-right corner at `corner` (the frame's inner corner). */
@@ -88,13 +97,14 @@ export function titleBlock(f: TitleBlockFields, corner: SheetPoint): SheetShape[
       shapes.push({ type: "text", layer: "text", role: "label", at: sheetPoint(cx + 1, cy + c.h - 2.6), text: c.label, heightMm: TEXT_HEIGHTS.small, align: "left" });
     }
     if (c.value !== undefined) {
-      const vh = c.valueHeight ?? TEXT_HEIGHTS.normal;
+      const weight = c.bold ? ("bold" as const) : undefined;
+      const vh = fittingHeight(c.value, c.w - 3, c.valueHeight ?? TEXT_HEIGHTS.normal, weight);
       const t: SheetText = {
         type: "text",
         layer: "text",
         role: "title",
         at: sheetPoint(cx + 1.5, cy + (c.label ? 1.6 : (c.h - vh) / 2)),
-        text: fitText(c.value, c.w - 3, vh),
+        text: fitText(c.value, c.w - 3, vh, weight),
         heightMm: vh,
         align: "left",
         ...(c.bold ? { weight: "bold" as const } : {}),
