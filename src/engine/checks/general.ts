@@ -82,6 +82,89 @@ function issue(part: ResolvedPart, f: ResolvedFeature, index: number, code: stri
 
 const FACE_WORD: Record<string, string> = { "x-": "left", "x+": "right", "y-": "front", "y+": "back", "z-": "bottom", "z+": "top" };
 
+/** What the per-feature wall checks share (module functions, so no closures are made per feature). */
+interface FeatureCtx {
+  part: ResolvedPart;
+  base: BaseGeometry;
+  owner: ResolvedFeature;
+  index: number;
+  suffix: string;
+  fmt: (mm: number) => string;
+  minWallMm: number;
+  out: GeometryIssue[];
+  bores: Bore[];
+}
+
+/** Walls from a footprint [u0,u1]×[v0,v1] on the entry face to the four side faces of a block. */
+function sideWalls(c: FeatureCtx, direction: Direction, lo: Record<string, number>, hi: Record<string, number>, what: string): void {
+  const { part, base, owner, index, suffix, fmt, minWallMm, out } = c;
+  for (const a of faceAxes(direction)) {
+    const walls: Array<[number, string]> = [
+      [lo[a]! - base.min[a], FACE_WORD[`${a}-`]!],
+      [base.max[a] - hi[a]!, FACE_WORD[`${a}+`]!],
+    ];
+    for (const [w, side] of walls) {
+      if (w < -1e-9) out.push(issue(part, owner, index, "breakout", "error", `${what}${suffix} breaks out of the ${side} face by ${fmt(-w)}.`));
+      else if (w < minWallMm - 1e-9) out.push(issue(part, owner, index, "thin-wall", "warning", `${what}${suffix} leaves only ${fmt(w)} of wall to the ${side} face (at least ${fmt(minWallMm)} is wanted).`));
+    }
+  }
+}
+
+function floor(c: FeatureCtx, at: Point3, direction: Direction, depth: number | undefined, what: string): void {
+  const { part, base, owner, index, suffix, fmt, minWallMm, out } = c;
+  if (depth === undefined) return;
+  const left = availableDepth(base, at, direction) - depth;
+  if (left > 1e-6 && left < minWallMm - 1e-9) out.push(issue(part, owner, index, "thin-floor", "warning", `${what}${suffix} leaves a floor only ${fmt(left)} thick (at least ${fmt(minWallMm)} is wanted).`));
+}
+
+/** Walls around a round cut of the given (outer) radius, and the bore itself for the pairwise checks. */
+function round(c: FeatureCtx, at: Point3, direction: Direction, radius: number, length: number, what: string, boreRadius = radius): void {
+  const { part, base, owner, index, suffix, fmt, minWallMm, out, bores } = c;
+  const axis = axisOf(direction);
+  const [u, v] = faceAxes(direction);
+  if (base.kind === "block") {
+    sideWalls(c, direction, { [u]: at[u] - radius, [v]: at[v] - radius }, { [u]: at[u] + radius, [v]: at[v] + radius }, what);
+  } else if (axis === "z") {
+    const z1 = at.z + (direction === "+z" ? length : -length);
+    const offset = Math.hypot(at.x, at.y);
+    for (const s of stepsBetween(base, at.z, z1)) {
+      const w = s.diameter / 2 - offset - radius;
+      if (w < -1e-9) out.push(issue(part, owner, index, "breakout", "error", `${what}${suffix} breaks out of the Ø${fmt(s.diameter)} outside by ${fmt(-w)}.`));
+      else if (w < minWallMm - 1e-9) out.push(issue(part, owner, index, "thin-wall", "warning", `${what}${suffix} leaves only ${fmt(w)} of wall to the Ø${fmt(s.diameter)} outside (at least ${fmt(minWallMm)} is wanted).`));
+    }
+  }
+  const sign = direction[0] === "-" ? -1 : 1;
+  const a0 = at[axis];
+  const a1 = a0 + sign * length;
+  bores.push({ name: `${what}${suffix}`, ref: featureRef(owner, index), index, axis, centre: [at[u], at[v]], radius: boreRadius, from: Math.min(a0, a1), to: Math.max(a0, a1), radial: false });
+}
+
+function radial(c: FeatureCtx, at: Point3, direction: Direction, radius: number, depth: number | undefined, what: string): void {
+  const { part, base, owner, index, suffix, fmt, minWallMm, out, bores } = c;
+  if (base.kind !== "turned") return;
+  const step = stepAt(base, at.z);
+  if (!step) return;
+  const zWalls: Array<[number, string]> = [
+    [at.z - radius - step.zStart, step.index === 0 ? "bottom end" : "shoulder below"],
+    [step.zEnd - at.z - radius, step.index === base.steps.length - 1 ? "top end" : "shoulder above"],
+  ];
+  for (const [w, side] of zWalls) {
+    if (w >= -1e-9 && w < minWallMm - 1e-9 && !(w < 1e-9 && side.startsWith("shoulder"))) {
+      out.push(issue(part, owner, index, "thin-wall", "warning", `${what}${suffix} leaves only ${fmt(w)} to the ${side} (at least ${fmt(minWallMm)} is wanted).`));
+    }
+  }
+  const R = step.diameter / 2;
+  const axis = axisOf(direction);
+  const o = axis === "x" ? at.y : at.x;
+  const entryAlong = Math.sqrt(Math.max(0, R * R - o * o));
+  const sign = direction[0] === "-" ? -1 : 1;
+  const entryCoord = -sign * entryAlong;
+  const bottomCoord = depth === undefined ? sign * entryAlong : entryCoord + sign * depth;
+  const entry: Point3 = axis === "x" ? { x: entryCoord, y: o, z: at.z } : { x: o, y: entryCoord, z: at.z };
+  const bottom: Point3 = axis === "x" ? { x: bottomCoord, y: o, z: at.z } : { x: o, y: bottomCoord, z: at.z };
+  bores.push({ name: `${what}${suffix}`, ref: featureRef(owner, index), index, axis, centre: [0, 0], radius, from: at.z - radius, to: at.z + radius, radial: true, entry, bottom, z: at.z });
+}
+
 function featureIssues(
   part: ResolvedPart,
   base: BaseGeometry,
@@ -94,76 +177,15 @@ function featureIssues(
   bores: Bore[],
 ): void {
   const { fmt, minWallMm } = o;
-  /** Walls from a footprint [u0,u1]×[v0,v1] on the entry face to the four side faces of a block. */
-  const sideWalls = (direction: Direction, lo: Record<string, number>, hi: Record<string, number>, what: string) => {
-    for (const a of faceAxes(direction)) {
-      const walls: Array<[number, string]> = [
-        [lo[a]! - base.min[a], FACE_WORD[`${a}-`]!],
-        [base.max[a] - hi[a]!, FACE_WORD[`${a}+`]!],
-      ];
-      for (const [w, side] of walls) {
-        if (w < -1e-9) out.push(issue(part, owner, index, "breakout", "error", `${what}${suffix} breaks out of the ${side} face by ${fmt(-w)}.`));
-        else if (w < minWallMm - 1e-9) out.push(issue(part, owner, index, "thin-wall", "warning", `${what}${suffix} leaves only ${fmt(w)} of wall to the ${side} face (at least ${fmt(minWallMm)} is wanted).`));
-      }
-    }
-  };
-  const floor = (at: Point3, direction: Direction, depth: number | undefined, what: string) => {
-    if (depth === undefined) return;
-    const left = availableDepth(base, at, direction) - depth;
-    if (left > 1e-6 && left < minWallMm - 1e-9) out.push(issue(part, owner, index, "thin-floor", "warning", `${what}${suffix} leaves a floor only ${fmt(left)} thick (at least ${fmt(minWallMm)} is wanted).`));
-  };
-  /** Walls around a round cut of the given (outer) radius, and the bore itself for the pairwise checks. */
-  const round = (at: Point3, direction: Direction, radius: number, length: number, what: string, boreRadius = radius) => {
-    const axis = axisOf(direction);
-    const [u, v] = faceAxes(direction);
-    if (base.kind === "block") {
-      sideWalls(direction, { [u]: at[u] - radius, [v]: at[v] - radius }, { [u]: at[u] + radius, [v]: at[v] + radius }, what);
-    } else if (axis === "z") {
-      const z1 = at.z + (direction === "+z" ? length : -length);
-      const offset = Math.hypot(at.x, at.y);
-      for (const s of stepsBetween(base, at.z, z1)) {
-        const w = s.diameter / 2 - offset - radius;
-        if (w < -1e-9) out.push(issue(part, owner, index, "breakout", "error", `${what}${suffix} breaks out of the Ø${fmt(s.diameter)} outside by ${fmt(-w)}.`));
-        else if (w < minWallMm - 1e-9) out.push(issue(part, owner, index, "thin-wall", "warning", `${what}${suffix} leaves only ${fmt(w)} of wall to the Ø${fmt(s.diameter)} outside (at least ${fmt(minWallMm)} is wanted).`));
-      }
-    }
-    const sign = direction[0] === "-" ? -1 : 1;
-    const a0 = at[axis];
-    const a1 = a0 + sign * length;
-    bores.push({ name: `${what}${suffix}`, ref: featureRef(owner, index), index, axis, centre: [at[u], at[v]], radius: boreRadius, from: Math.min(a0, a1), to: Math.max(a0, a1), radial: false });
-  };
-  const radial = (at: Point3, direction: Direction, radius: number, depth: number | undefined, what: string) => {
-    if (base.kind !== "turned") return;
-    const step = stepAt(base, at.z);
-    if (!step) return;
-    const zWalls: Array<[number, string]> = [
-      [at.z - radius - step.zStart, step.index === 0 ? "bottom end" : "shoulder below"],
-      [step.zEnd - at.z - radius, step.index === base.steps.length - 1 ? "top end" : "shoulder above"],
-    ];
-    for (const [w, side] of zWalls) {
-      if (w >= -1e-9 && w < minWallMm - 1e-9 && !(w < 1e-9 && side.startsWith("shoulder"))) {
-        out.push(issue(part, owner, index, "thin-wall", "warning", `${what}${suffix} leaves only ${fmt(w)} to the ${side} (at least ${fmt(minWallMm)} is wanted).`));
-      }
-    }
-    const R = step.diameter / 2;
-    const axis = axisOf(direction);
-    const o = axis === "x" ? at.y : at.x;
-    const entryAlong = Math.sqrt(Math.max(0, R * R - o * o));
-    const sign = direction[0] === "-" ? -1 : 1;
-    const entryCoord = -sign * entryAlong;
-    const bottomCoord = depth === undefined ? sign * entryAlong : entryCoord + sign * depth;
-    const point = (c: number): Point3 => (axis === "x" ? { x: c, y: o, z: at.z } : { x: o, y: c, z: at.z });
-    bores.push({ name: `${what}${suffix}`, ref: featureRef(owner, index), index, axis, centre: [0, 0], radius, from: at.z - radius, to: at.z + radius, radial: true, entry: point(entryCoord), bottom: point(bottomCoord), z: at.z });
-  };
-
+  const c: FeatureCtx = { part, base, owner, index, suffix, fmt, minWallMm, out, bores };
   switch (f.kind) {
     case "hole": {
       const length = holeLengthMm(f, base);
-      if (isRadial(base, f.direction)) return radial(f.at, f.direction, f.diameter / 2, f.through || f.depth === undefined ? undefined : f.depth, `the Ø${fmt(f.diameter)} cross hole`);
+      if (isRadial(base, f.direction)) return radial(c, f.at, f.direction, f.diameter / 2, f.through || f.depth === undefined ? undefined : f.depth, `the Ø${fmt(f.diameter)} cross hole`);
       const outer = f.counterbore ? f.counterbore.diameter + 2 * (f.chamfer ?? 0) : f.countersink ? f.countersink.diameter : f.diameter + 2 * (f.chamfer ?? 0);
       // Side walls from the largest diameter at the face; neighbours see the hole's own diameter.
-      round(f.at, f.direction, outer / 2, length, `the Ø${fmt(f.diameter)} hole`, f.diameter / 2);
-      floor(f.at, f.direction, f.through ? undefined : f.depth, `the Ø${fmt(f.diameter)} hole`);
+      round(c, f.at, f.direction, outer / 2, length, `the Ø${fmt(f.diameter)} hole`, f.diameter / 2);
+      floor(c, f.at, f.direction, f.through ? undefined : f.depth, `the Ø${fmt(f.diameter)} hole`);
       return;
     }
     case "thread": {
@@ -171,10 +193,10 @@ function featureIssues(
       const t = metricThread(f.designation);
       if (!t) return;
       const bore = internalThreadBore(f, base);
-      if (isRadial(base, f.direction)) radial(f.at, f.direction, t.nominalDiameterMm / 2, bore.through ? undefined : bore.drillDepthMm, `the ${t.designation} thread`);
+      if (isRadial(base, f.direction)) radial(c, f.at, f.direction, t.nominalDiameterMm / 2, bore.through ? undefined : bore.drillDepthMm, `the ${t.designation} thread`);
       else {
-        round(f.at, f.direction, t.nominalDiameterMm / 2 + (f.chamfer ?? 0), bore.drillDepthMm, `the ${t.designation} thread`, t.nominalDiameterMm / 2);
-        floor(f.at, f.direction, bore.through ? undefined : bore.drillDepthMm, `the ${t.designation} tap-drill hole`);
+        round(c, f.at, f.direction, t.nominalDiameterMm / 2 + (f.chamfer ?? 0), bore.drillDepthMm, `the ${t.designation} thread`, t.nominalDiameterMm / 2);
+        floor(c, f.at, f.direction, bore.through ? undefined : bore.drillDepthMm, `the ${t.designation} tap-drill hole`);
       }
       const full = bore.through ? bore.drillDepthMm : (f.depth ?? bore.drillDepthMm);
       const factor = o.minThreadEngagement ?? THREAD_ENGAGEMENT_FACTOR[part.material] ?? 1;
@@ -189,8 +211,8 @@ function featureIssues(
       const across = faceAxes(f.direction).find((a) => a !== f.along)!;
       const lo = { [f.along]: f.at[f.along] - f.width / 2, [across]: f.at[across] - f.width / 2 };
       const hi = { [f.along]: f.at[f.along] + f.length + f.width / 2, [across]: f.at[across] + f.width / 2 };
-      sideWalls(f.direction, lo, hi, `the ${fmt(f.width)} slot`);
-      floor(f.at, f.direction, f.through ? undefined : f.depth, `the ${fmt(f.width)} slot`);
+      sideWalls(c, f.direction, lo, hi, `the ${fmt(f.width)} slot`);
+      floor(c, f.at, f.direction, f.through ? undefined : f.depth, `the ${fmt(f.width)} slot`);
       return;
     }
     case "pocket": {
@@ -198,8 +220,8 @@ function featureIssues(
       const [u, v] = faceAxes(f.direction);
       const hu = f.shape.kind === "rect" ? f.shape.u / 2 : f.shape.diameter / 2;
       const hv = f.shape.kind === "rect" ? f.shape.v / 2 : f.shape.diameter / 2;
-      sideWalls(f.direction, { [u]: f.at[u] - hu, [v]: f.at[v] - hv }, { [u]: f.at[u] + hu, [v]: f.at[v] + hv }, "the pocket");
-      floor(f.at, f.direction, f.depth, "the pocket");
+      sideWalls(c, f.direction, { [u]: f.at[u] - hu, [v]: f.at[v] - hv }, { [u]: f.at[u] + hu, [v]: f.at[v] + hv }, "the pocket");
+      floor(c, f.at, f.direction, f.depth, "the pocket");
       return;
     }
     case "eccentric-bore": {
@@ -239,16 +261,18 @@ function pointToRect(px: number, py: number, x0: number, x1: number, y0: number,
   return Math.hypot(dx, dy);
 }
 
+/** Records a wall between two bores that is negative (they overlap) or thinner than wanted. */
+function reportWall(part: ResolvedPart, o: GeneralCheckOptions, out: GeometryIssue[], a: Bore, b: Bore, wall: number): void {
+  const { fmt, minWallMm } = o;
+  if (wall < -1e-9) {
+    out.push({ partId: part.id, featureIndex: a.index, featureRef: a.ref, code: "features-overlap", severity: "error", blocking: false, message: `${part.name}: ${a.name} runs into ${b.name} (they overlap by ${fmt(-wall)}).` });
+  } else if (wall < minWallMm - 1e-9) {
+    out.push({ partId: part.id, featureIndex: a.index, featureRef: a.ref, code: "thin-wall", severity: "warning", message: `${part.name}: only ${fmt(wall)} of wall between ${a.name} and ${b.name} (at least ${fmt(minWallMm)} is wanted).`, blocking: false });
+  }
+}
+
 /** Walls between neighbouring bores of one part: parallel pairs, and radial cross holes against axial bores. */
 function pairwiseWalls(part: ResolvedPart, bores: Bore[], o: GeneralCheckOptions, out: GeometryIssue[]): void {
-  const { fmt, minWallMm } = o;
-  const report = (a: Bore, b: Bore, wall: number) => {
-    if (wall < -1e-9) {
-      out.push({ partId: part.id, featureIndex: a.index, featureRef: a.ref, code: "features-overlap", severity: "error", blocking: false, message: `${part.name}: ${a.name} runs into ${b.name} (they overlap by ${fmt(-wall)}).` });
-    } else if (wall < minWallMm - 1e-9) {
-      out.push({ partId: part.id, featureIndex: a.index, featureRef: a.ref, code: "thin-wall", severity: "warning", message: `${part.name}: only ${fmt(wall)} of wall between ${a.name} and ${b.name} (at least ${fmt(minWallMm)} is wanted).`, blocking: false });
-    }
-  };
   for (let i = 0; i < bores.length; i++) {
     for (let j = i + 1; j < bores.length; j++) {
       const a = bores[i]!;
@@ -259,7 +283,7 @@ function pairwiseWalls(part: ResolvedPart, bores: Bore[], o: GeneralCheckOptions
         if (a.axis !== b.axis) continue;
         if (a.to <= b.from + 1e-9 || b.to <= a.from + 1e-9) continue;
         const wall = Math.hypot(a.centre[0] - b.centre[0], a.centre[1] - b.centre[1]) - a.radius - b.radius;
-        report(a, b, wall);
+        reportWall(part, o, out, a, b, wall);
       } else if (a.radial !== b.radial) {
         const r = a.radial ? a : b;
         const ax = a.radial ? b : a;
@@ -272,7 +296,7 @@ function pairwiseWalls(part: ResolvedPart, bores: Bore[], o: GeneralCheckOptions
         const y0 = alongX ? r.entry.y - r.radius : Math.min(r.entry.y, r.bottom.y);
         const y1 = alongX ? r.entry.y + r.radius : Math.max(r.entry.y, r.bottom.y);
         const wall = pointToRect(ax.centre[0], ax.centre[1], x0, x1, y0, y1) - ax.radius;
-        report(r, ax, wall);
+        reportWall(part, o, out, r, ax, wall);
       }
     }
   }

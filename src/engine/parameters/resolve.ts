@@ -101,6 +101,11 @@ function editDistance(a: string, b: string): number {
   return row[b.length]!;
 }
 
+/** Records one refused parameter (a module function: no closure is made per parameter). */
+function bad(issues: ParameterIssue[], key: string, received: unknown, message: string, allowed?: string): void {
+  issues.push({ key, path: `parameters.${key}`, message, received, ...(allowed ? { allowed } : {}) });
+}
+
 /**
  * Resolves user input against the template's parameter list.
  * @throws ParameterResolutionError listing every bad parameter.
@@ -138,8 +143,6 @@ export function resolveParameters(
   for (const spec of specs) {
     const has = Object.prototype.hasOwnProperty.call(given, spec.key) && given[spec.key] !== undefined;
     const raw = has ? given[spec.key] : undefined;
-    const bad = (message: string, allowed?: string) =>
-      issues.push({ key: spec.key, path: `parameters.${spec.key}`, message, received: raw, ...(allowed ? { allowed } : {}) });
 
     if (!has) {
       defaulted.push(spec.key);
@@ -157,18 +160,18 @@ export function resolveParameters(
       case "count": {
         const range = allowedRange(spec, templateUnits, userUnits)!;
         if (typeof raw !== "number" || !Number.isFinite(raw)) {
-          bad(`${spec.key} (${spec.label}) must be ${unitWord(spec, userUnits)} between ${range}; got ${describe(raw)}.`, range);
+          bad(issues, spec.key, raw, `${spec.key} (${spec.label}) must be ${unitWord(spec, userUnits)} between ${range}; got ${describe(raw)}.`, range);
           break;
         }
         if (spec.kind === "count" && !Number.isInteger(raw)) {
-          bad(`${spec.key} (${spec.label}) must be a whole number between ${range}; got ${raw}.`, range);
+          bad(issues, spec.key, raw, `${spec.key} (${spec.label}) must be a whole number between ${range}; got ${raw}.`, range);
           break;
         }
         const inTemplate = spec.kind === "length" ? convertLength(raw, userUnits, templateUnits) : raw;
         const slack = SLACK * Math.max(1, Math.abs(spec.min), Math.abs(spec.max));
         if (inTemplate < spec.min - slack || inTemplate > spec.max + slack) {
           const shown = spec.kind === "length" ? `${formatNumber(raw, 6)} ${userUnits}` : spec.kind === "angle" ? `${formatNumber(raw, 6)}°` : spec.kind === "force" ? `${formatNumber(raw, 6)} N` : formatNumber(raw, 6);
-          bad(`${spec.key} (${spec.label}) must be between ${range}; got ${shown}.`, range);
+          bad(issues, spec.key, raw, `${spec.key} (${spec.label}) must be between ${range}; got ${shown}.`, range);
           break;
         }
         // A value a hair outside a limit only by conversion noise is the limit itself.
@@ -180,7 +183,7 @@ export function resolveParameters(
       }
       case "boolean":
         if (typeof raw !== "boolean") {
-          bad(`${spec.key} (${spec.label}) must be true or false; got ${describe(raw)}.`, "true, false");
+          bad(issues, spec.key, raw, `${spec.key} (${spec.label}) must be true or false; got ${describe(raw)}.`, "true, false");
           break;
         }
         values[spec.key] = valuesMm[spec.key] = display[spec.key] = raw;
@@ -188,7 +191,7 @@ export function resolveParameters(
       case "choice": {
         const allowed = choiceValues(spec);
         if (typeof raw !== "string" || !allowed.includes(raw)) {
-          bad(`${spec.key} (${spec.label}) must be one of ${allowed.join(", ")}; got ${describe(raw)}.`, allowed.join(", "));
+          bad(issues, spec.key, raw, `${spec.key} (${spec.label}) must be one of ${allowed.join(", ")}; got ${describe(raw)}.`, allowed.join(", "));
           break;
         }
         values[spec.key] = valuesMm[spec.key] = display[spec.key] = raw;
@@ -197,7 +200,7 @@ export function resolveParameters(
       case "material": {
         const allowed = spec.materials ?? [];
         if (typeof raw !== "string" || (allowed.length > 0 && !allowed.includes(raw))) {
-          bad(`${spec.key} (${spec.label}) must be one of ${allowed.join(", ")}; got ${describe(raw)}.`, allowed.join(", "));
+          bad(issues, spec.key, raw, `${spec.key} (${spec.label}) must be one of ${allowed.join(", ")}; got ${describe(raw)}.`, allowed.join(", "));
           break;
         }
         values[spec.key] = valuesMm[spec.key] = display[spec.key] = raw;

@@ -70,15 +70,17 @@ function onFace(base: BaseGeometry, at: Point3, direction: Direction): boolean {
   return faceAxes(direction).every((a) => at[a] >= base.min[a] - 1e-6 && at[a] <= base.max[a] + 1e-6);
 }
 
+/** Whether the part is a block; otherwise the feature is refused as unsupported on a turned part. */
+function blockOnly(ctx: Ctx, f: ResolvedFeature, index: number, what: string): boolean {
+  if (ctx.base.kind !== "block") {
+    push(ctx, f, index, "unsupported", `${what} can only be cut in a block; this part is turned.`);
+    return false;
+  }
+  return true;
+}
+
 function guardFeature(ctx: Ctx, f: ResolvedFeature, index: number): void {
   const { base, fmt } = ctx;
-  const blockOnly = (what: string) => {
-    if (base.kind !== "block") {
-      push(ctx, f, index, "unsupported", `${what} can only be cut in a block; this part is turned.`);
-      return false;
-    }
-    return true;
-  };
   switch (f.kind) {
     case "block":
     case "turned":
@@ -136,7 +138,7 @@ function guardFeature(ctx: Ctx, f: ResolvedFeature, index: number): void {
       return;
     }
     case "slot": {
-      if (!blockOnly("A slot")) return;
+      if (!blockOnly(ctx, f, index, "A slot")) return;
       positive(ctx, f, index, "width", f.width);
       positive(ctx, f, index, "length", f.length);
       if (f.along === axisOf(f.direction)) return void push(ctx, f, index, "unsupported", `a slot cut in ${f.direction} cannot run along ${f.along}.`);
@@ -150,7 +152,7 @@ function guardFeature(ctx: Ctx, f: ResolvedFeature, index: number): void {
       return;
     }
     case "pocket": {
-      if (!blockOnly("A pocket")) return;
+      if (!blockOnly(ctx, f, index, "A pocket")) return;
       positive(ctx, f, index, "depth", f.depth);
       if (f.shape.kind === "rect") {
         positive(ctx, f, index, "pocket width", f.shape.u);
@@ -164,7 +166,7 @@ function guardFeature(ctx: Ctx, f: ResolvedFeature, index: number): void {
       return;
     }
     case "step": {
-      if (!blockOnly("A step")) return;
+      if (!blockOnly(ctx, f, index, "A step")) return;
       let touches = false;
       for (const a of ["x", "y", "z"] as const) {
         const lo = Math.min(f.from[a], f.to[a]);
@@ -179,7 +181,7 @@ function guardFeature(ctx: Ctx, f: ResolvedFeature, index: number): void {
       return;
     }
     case "v-groove": {
-      if (!blockOnly("A V-groove")) return;
+      if (!blockOnly(ctx, f, index, "A V-groove")) return;
       positive(ctx, f, index, "depth", f.depth);
       if (!(f.angleDeg > 1 && f.angleDeg < 179)) push(ctx, f, index, "degenerate-size", `the V angle ${f.angleDeg}° must lie between 1° and 179°.`);
       if (f.along === axisOf(f.direction)) return void push(ctx, f, index, "unsupported", `a groove cut in ${f.direction} cannot run along ${f.along}.`);
