@@ -186,7 +186,7 @@ describe("a larger vise, entered in inches", () => {
   it("resolves the parts in mm", () => {
     const rod = e.parts.find((p) => p.id === "stop-rod")!;
     // Rod length = hole depth 2·9.525 + reach 50.8 = 69.85 mm.
-    expect(rod.features[0]).toEqual({ kind: "turned", steps: [{ diameter: 9.525, length: 69.85 }] });
+    expect(rod.features[0]).toEqual({ kind: "turned", steps: [{ diameter: 9.525, length: 69.85, fit: "h6" }] });
     expect(e.partSummaries.find((p) => p.id === "cam")!.bboxMm).toEqual({ x: 25.4, y: 25.4, z: 10 });
   });
 });

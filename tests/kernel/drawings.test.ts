@@ -216,6 +216,9 @@ describe("PDF pack of the cam-lock vise stop (mm, first angle)", () => {
     // ISO 286-2: H7 at Ø8 is +0.015/0, at Ø5 +0.012/0.
     expect(pageOf("CAM-VISE-STOP-BODY").join(" ")).toContain("Ø8 H7 (+0.015/0)");
     expect(pageOf("CAM-VISE-STOP-CAM").join(" ")).toContain("Ø5 H7 (+0.012/0)");
+    // ISO 286-2 over 6 to 10 mm: g6 is -0.005/-0.014 (the carrier's boss), h6 is 0/-0.009 (the stop rod).
+    expect(pageOf("CAM-VISE-STOP-CARRIER").join(" ")).toContain("Ø8 g6 (-0.005/-0.014)");
+    expect(pageOf("CAM-VISE-STOP-STOP-ROD").join(" ")).toContain("Ø8 h6 (0/-0.009)");
   });
 
   it("each feature's location from the datums is on its sheet (every linear dimension the annotators ask for is printed)", () => {

@@ -267,6 +267,22 @@ describe("annotations: size and location of every feature (ISO 129-1)", () => {
     // Shoulders at 3 and 12 from z = 0, overall 26, thread length 10 (shorter than its 14 mm step).
     expect(r.filter((x) => x.axis === "z").map((x) => x.text).sort()).toEqual(["10", "12", "26", "3"]);
   });
+  it("a turned step with a fit: Ø, the shaft class and its ISO 286 limits after the size, in mm and in inches", () => {
+    const boss: ResolvedPart = {
+      id: "boss",
+      name: "Boss",
+      material: "mild-steel",
+      features: [{ kind: "turned", steps: [{ diameter: 12, length: 2 }, { diameter: 8, length: 8, fit: "g6" }, { diameter: 5, length: 20, fit: "h6" }] }],
+    };
+    const texts = (units: "mm" | "in") =>
+      annotatePart(context(boss, units))
+        .filter((x): x is LinearRequest => x.kind === "linear" && x.axis === "x")
+        .map((x) => x.text);
+    // ISO 286-2, over 6 to 10 mm: g6 is -0.005/-0.014; over 3 to 6 mm: h6 is 0/-0.008.
+    expect(texts("mm")).toEqual(["Ø12", "Ø8 g6 (-0.005/-0.014)", "Ø5 h6 (0/-0.008)"]);
+    // The same limits in decimal inches (0.005 mm = .0002 in, 0.014 mm = .0006 in).
+    expect(texts("in")[1]).toBe("Ø.315 g6 (-.0002/-.0006)");
+  });
 });
 
 describe("title block (ISO 7200)", () => {

@@ -70,7 +70,8 @@ function vocabulary<N extends z.ZodType, S extends z.ZodType, B extends z.ZodTyp
   const common = { id: z.string().regex(/^[a-z][a-zA-Z0-9-]*$/).max(60).optional(), when: bool.optional(), label: text.optional() };
 
   const block = z.strictObject({ kind: z.literal("block"), ...common, size: point });
-  const turnedStep = z.strictObject({ diameter: num, length: num, label: text.optional() });
+  /** One diameter of a turned part; `fit` is its ISO 286 shaft tolerance class (e.g. "g6"), drawn after the size. */
+  const turnedStep = z.strictObject({ diameter: num, length: num, label: text.optional(), fit: text.optional() });
   const turned = z.strictObject({ kind: z.literal("turned"), ...common, steps: z.array(turnedStep).min(1).max(20) });
 
   const counterbore = z.strictObject({ diameter: num, depth: num });

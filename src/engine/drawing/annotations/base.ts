@@ -3,7 +3,8 @@
  *
  *  - Block: the three overall sizes (ISO 129-1 §4: overall dimensions outermost), length and height in
  *    the front view, width in the top (or end) view.
- *  - Turned: every step's diameter (Ø, or the thread designation where an external thread is cut on it)
+ *  - Turned: every step's diameter (Ø with its ISO 286 shaft class and limits where the step has a fit,
+ *    "Ø8 g6 (−0.005/−0.014)", or the thread designation where an external thread is cut on it)
  *    and its shoulder positions measured from the datum end, plus the overall length. External threads
  *    add their length when shorter than their step, and the ISO 6410 thread marks.
  */
@@ -39,7 +40,7 @@ export function annotateTurned(f: TurnedFeature, ctx: AnnotateContext, name: str
     const rad = r.diameter / 2;
     const thread = threads.find((t) => t.step === i);
     const stepName = f.steps[i]!.label ?? `${name} step ${i + 1}`;
-    const text = thread ? threadLabel(thread.designation) : sizeWithFit(ctx, r.diameter, undefined, "shaft");
+    const text = thread ? threadLabel(thread.designation) : sizeWithFit(ctx, r.diameter, f.steps[i]!.fit, "shaft");
     // The extension lines may start anywhere along the step's outline; the layout picks the free end.
     out.push(
       sizeBetween(
