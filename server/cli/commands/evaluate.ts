@@ -6,7 +6,7 @@
  */
 import { evaluateTemplate, evaluationContract, ParameterResolutionError, type CompiledTemplate } from "@/engine";
 import { builtInTemplates } from "@server/templates";
-import { CliUsageError, parseArgs, rejectUnknown, single, type CliCommand } from "../args";
+import { CliUsageError, parseArgs, rejectUnknown, single, type CliCommand, type ParsedArgs } from "../args";
 
 const USAGE = "evaluate <template-id> [--set key=value]… [--units mm|in]";
 
@@ -32,6 +32,22 @@ export function typedSets(compiled: CompiledTemplate, sets: readonly string[]): 
   return out;
 }
 
+/**
+ * The template, `--units` and `--set` values of a command that names one template (`evaluate`, `model`);
+ * a usage error for a missing or unknown template, extra arguments or bad units.
+ */
+export function templateArguments(parsed: ParsedArgs, usage: string): { compiled: CompiledTemplate; units: "mm" | "in" | undefined; parameters: Record<string, unknown> } {
+  const [id, ...extra] = parsed.positional;
+  if (!id) throw new CliUsageError(`Name a template.\nUsage: npm run -s cli -- ${usage}`);
+  if (extra.length > 0) throw new CliUsageError(`Unexpected argument${extra.length > 1 ? "s" : ""}: ${extra.join(" ")}.`);
+  const store = builtInTemplates();
+  const compiled = store.get(id);
+  if (!compiled) throw new CliUsageError(`There is no template "${id}". Templates: ${store.list().map((c) => c.template.id).join(", ")}.`);
+  const units = single(parsed, "units");
+  if (units !== undefined && units !== "mm" && units !== "in") throw new CliUsageError(`--units must be mm or in, not "${units}".`);
+  return { compiled, units, parameters: typedSets(compiled, parsed.options.get("set") ?? []) };
+}
+
 export const evaluateCommand: CliCommand = {
   name: "evaluate",
   usage: USAGE,
@@ -39,15 +55,7 @@ export const evaluateCommand: CliCommand = {
   async run(args) {
     const parsed = parseArgs(args);
     rejectUnknown(parsed, ["set", "units"]);
-    const [id, ...extra] = parsed.positional;
-    if (!id) throw new CliUsageError(`Name a template.\nUsage: npm run -s cli -- ${USAGE}`);
-    if (extra.length > 0) throw new CliUsageError(`Unexpected argument${extra.length > 1 ? "s" : ""}: ${extra.join(" ")}.`);
-    const store = builtInTemplates();
-    const compiled = store.get(id);
-    if (!compiled) throw new CliUsageError(`There is no template "${id}". Templates: ${store.list().map((c) => c.template.id).join(", ")}.`);
-    const units = single(parsed, "units");
-    if (units !== undefined && units !== "mm" && units !== "in") throw new CliUsageError(`--units must be mm or in, not "${units}".`);
-    const parameters = typedSets(compiled, parsed.options.get("set") ?? []);
+    const { compiled, units, parameters } = templateArguments(parsed, USAGE);
     try {
       const evaluation = evaluateTemplate(compiled, { parameters, ...(units ? { units } : {}) });
       process.stdout.write(`${JSON.stringify(evaluationContract(evaluation), null, 2)}\n`);

@@ -9,9 +9,8 @@
 import { evaluateTemplate, ParameterResolutionError } from "@/engine";
 import { partMassKgOrUndefined } from "@/engine/parts/analytic";
 import { createInProcessKernel, KernelError, type ModelTaskOutput } from "@server/kernel";
-import { builtInTemplates } from "@server/templates";
-import { CliUsageError, parseArgs, rejectUnknown, single, type CliCommand } from "../args";
-import { typedSets } from "./evaluate";
+import { CliUsageError, parseArgs, rejectUnknown, type CliCommand } from "../args";
+import { templateArguments } from "./evaluate";
 
 const USAGE = "model <template-id> [--set key=value]… [--units mm|in]";
 
@@ -34,15 +33,7 @@ export const modelCommand: CliCommand = {
   async run(args) {
     const parsed = parseArgs(args);
     rejectUnknown(parsed, ["set", "units"]);
-    const [id, ...extra] = parsed.positional;
-    if (!id) throw new CliUsageError(`Name a template.\nUsage: npm run -s cli -- ${USAGE}`);
-    if (extra.length > 0) throw new CliUsageError(`Unexpected argument${extra.length > 1 ? "s" : ""}: ${extra.join(" ")}.`);
-    const store = builtInTemplates();
-    const compiled = store.get(id);
-    if (!compiled) throw new CliUsageError(`There is no template "${id}". Templates: ${store.list().map((c) => c.template.id).join(", ")}.`);
-    const units = single(parsed, "units");
-    if (units !== undefined && units !== "mm" && units !== "in") throw new CliUsageError(`--units must be mm or in, not "${units}".`);
-    const parameters = typedSets(compiled, parsed.options.get("set") ?? []);
+    const { compiled, units, parameters } = templateArguments(parsed, USAGE);
     let evaluation;
     try {
       evaluation = evaluateTemplate(compiled, { parameters, ...(units ? { units } : {}) });

@@ -6,6 +6,7 @@ import type {
   DuplicateDesignBody,
   UpdateDesignBody,
 } from "@/shared/designs";
+import { abortOnClose, sendDownload, today } from "@server/lib/downloads";
 import type { DesignExportService } from "./export-service";
 import type { DesignService } from "./service";
 import type { DesignUpgradeService } from "./upgrade-service";
@@ -21,18 +22,6 @@ export function originOf(req: Request): string {
 }
 
 const idOf = (req: Request) => Number(req.params.id);
-
-/** Today's date as printed in the title block (the engine reads no clock; the server does). */
-const today = () => new Date().toISOString().slice(0, 10);
-
-/** Cancels the kernel work when the client goes away before the file is ready. */
-function abortOnClose(res: Response): AbortSignal {
-  const ctl = new AbortController();
-  res.on("close", () => {
-    if (!res.writableFinished) ctl.abort();
-  });
-  return ctl.signal;
-}
 
 /** The only designs code touching req/res. */
 export function designController(
@@ -55,13 +44,7 @@ export function designController(
         date: today(),
         signal: abortOnClose(res),
       });
-      res.status(200);
-      res.set("Content-Type", file.contentType);
-      res.set("Content-Length", String(file.body.length));
-      res.set("Content-Disposition", `attachment; filename="${file.fileName}"`);
-      res.set("Cache-Control", "private, no-store");
-      res.set("X-Content-Type-Options", "nosniff");
-      res.end(file.body);
+      sendDownload(res, file);
     },
     async list(req: Request, res: Response) {
       res.json({ designs: await designs.list(ownerOf(req), originOf(req)) });

@@ -8,9 +8,8 @@ import type { CompiledTemplate, Evaluation } from "@/engine";
 import type { DesignExportQuery } from "@/shared/designs";
 import { buildExport, ExportInputError, type ExportFile } from "@server/exporters/build-export";
 import type { KernelPool } from "@server/kernel";
-import { validatePartForKernel } from "@server/kernel/validate";
 import { badRequest, conflict, HttpError, notFound } from "@server/lib/errors";
-import { kernelErrorToHttp } from "@server/modules/model";
+import { guardPartsForKernel, kernelErrorToHttp } from "@server/modules/model";
 import type { OwnedRepository } from "@server/modules/profiles/repository";
 import type { MachineRecord } from "@server/db/models/machine";
 import type { MachineFields } from "@/shared/profiles";
@@ -42,11 +41,7 @@ function evaluate(
     always: "The saved values no longer suit this template; open the design in the configurator and fix them.",
   });
   requireBuildable(evaluation, "These values give parts that cannot be made; see the details.");
-  try {
-    for (const part of evaluation.parts) validatePartForKernel(part);
-  } catch (err) {
-    throw kernelErrorToHttp(err);
-  }
+  guardPartsForKernel(evaluation.parts);
   return evaluation;
 }
 

@@ -3,22 +3,9 @@ import type { Request, RequestHandler, Response } from "express";
 import { EXPORT_OPTION_KEYS, exportOptionsSchema, type ExportRequestBody } from "@/shared/exports";
 import { zodDetails } from "@server/middleware/validate";
 import { badRequest } from "@server/lib/errors";
+import { abortOnClose, sendDownload, today } from "@server/lib/downloads";
 import { parametersFromQuery } from "@server/modules/model";
 import type { ExportService } from "./service";
-
-/** Today's date as printed in the title block (the engine reads no clock; the server does). */
-function today(): string {
-  return new Date().toISOString().slice(0, 10);
-}
-
-/** Cancels the kernel work when the client goes away before the file is ready. */
-function abortOnClose(res: Response): AbortSignal {
-  const ctl = new AbortController();
-  res.on("close", () => {
-    if (!res.writableFinished) ctl.abort();
-  });
-  return ctl.signal;
-}
 
 export function exportController(service: ExportService) {
   const send = async (req: Request, res: Response, id: string, body: ExportRequestBody) => {
@@ -32,13 +19,7 @@ export function exportController(service: ExportService) {
       date: today(),
       signal: abortOnClose(res),
     });
-    res.status(200);
-    res.set("Content-Type", file.contentType);
-    res.set("Content-Length", String(file.body.length));
-    res.set("Content-Disposition", `attachment; filename="${file.fileName}"`);
-    res.set("Cache-Control", "private, no-store");
-    res.set("X-Content-Type-Options", "nosniff");
-    res.end(file.body);
+    sendDownload(res, file);
   };
 
   const get: RequestHandler = async (req, res) => {

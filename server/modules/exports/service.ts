@@ -6,10 +6,9 @@
 import type { CompiledTemplate, Evaluation } from "@/engine";
 import { evaluateForRequest, requireBuildable } from "@server/templates";
 import type { KernelPool } from "@server/kernel";
-import { validatePartForKernel } from "@server/kernel/validate";
 import { buildExport, ExportInputError, type ExportFile, type ExportFormat } from "@server/exporters/build-export";
 import { badRequest, HttpError, notFound } from "@server/lib/errors";
-import { kernelErrorToHttp } from "@server/modules/model";
+import { guardPartsForKernel, kernelErrorToHttp } from "@server/modules/model";
 import type { TemplateStore } from "@server/templates";
 
 export interface ExportServiceDeps {
@@ -39,11 +38,7 @@ export function exportService(deps: ExportServiceDeps) {
   function evaluate(compiled: CompiledTemplate, req: TemplateExportRequest): Evaluation {
     const evaluation = evaluateForRequest(compiled, { parameters: req.parameters, ...(req.units ? { units: req.units } : {}) });
     requireBuildable(evaluation);
-    try {
-      for (const part of evaluation.parts) validatePartForKernel(part);
-    } catch (err) {
-      throw kernelErrorToHttp(err);
-    }
+    guardPartsForKernel(evaluation.parts);
     return evaluation;
   }
 

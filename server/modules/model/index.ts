@@ -1,4 +1,4 @@
 export { modelRouter } from "./router";
 export { modelService, type ModelService, type PreparedModel } from "./service";
-export { kernelErrorToHttp } from "./kernel-http";
+export { guardPartsForKernel, kernelErrorToHttp } from "./kernel-http";
 export { parametersFromQuery } from "./query";

@@ -12,10 +12,9 @@ import type { EvaluateRequest } from "@/shared/templates";
 import type { KernelPool } from "@server/kernel";
 import { createResultCache, modelCacheKey } from "@server/kernel/model-cache";
 import type { ModelJsonTaskOutput } from "@server/kernel/tasks";
-import { validatePartForKernel } from "@server/kernel/validate";
 import { HttpError, notFound } from "@server/lib/errors";
 import type { TemplateStore } from "@server/templates";
-import { kernelErrorToHttp } from "./kernel-http";
+import { guardPartsForKernel, kernelErrorToHttp } from "./kernel-http";
 
 export interface ModelServiceDeps {
   templates: TemplateStore;
@@ -72,13 +71,7 @@ export function modelService(deps: ModelServiceDeps) {
   };
 
   /** The kernel's own guard, on this thread: a degenerate part never reaches a worker. */
-  function guard(parts: ResolvedPart[]): void {
-    try {
-      for (const part of parts) validatePartForKernel(part, { schema: false });
-    } catch (err) {
-      throw kernelErrorToHttp(err);
-    }
-  }
+  const guard = (parts: ResolvedPart[]): void => guardPartsForKernel(parts, { schema: false });
 
   /**
    * Evaluates and guards; throws 404/400 HttpErrors. Shared with the download routes. With
