@@ -22,9 +22,8 @@ import type { AddressInfo } from "node:net";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { createTestApp } from "../tests/api/helpers/app";
-import { builtInTemplates } from "@server/templates";
 import type { LoadSpec } from "./load-runner";
-import type { BenchModule } from "./types";
+import { benchTemplates, type BenchModule } from "./types";
 
 const CONNECTIONS = 10;
 const SECONDS = 4;
@@ -68,7 +67,7 @@ export const httpBench: BenchModule = {
       const cookie = (first.headers.get("set-cookie") ?? "").split(";")[0]!;
       const { csrfToken } = (await first.json()) as { csrfToken: string };
       const headers = { cookie, "x-csrf-token": csrfToken, "content-type": "application/json" };
-      for (const compiled of builtInTemplates().list()) {
+      for (const compiled of benchTemplates()) {
         const id = compiled.template.id;
         const url = `${base}/api/templates/${id}/evaluate`;
         const probe = await fetch(url, { method: "POST", headers, body: "{}" });

@@ -16,7 +16,7 @@ import type { CompiledTemplate } from "@/engine";
 import { createInProcessKernel, createKernelPool, kernelConfigFromEnv } from "@server/kernel";
 import { modelRouter, modelService } from "@server/modules/model";
 import { builtInTemplates } from "@server/templates";
-import { ms, percentiles, type BenchModule } from "./types";
+import { benchTemplates, ms, percentiles, type BenchModule } from "./types";
 
 const COLD_VARIANTS = 4;
 const CACHED_RUNS = 200;
@@ -50,7 +50,7 @@ export const kernelBench: BenchModule = {
     await inProcess.ready();
     const local = modelService({ templates, kernel: inProcess, cacheMb: 256 });
     try {
-      for (const compiled of templates.list()) {
+      for (const compiled of benchTemplates()) {
         const id = compiled.template.id;
         const cold: number[] = [];
         for (const parameters of variants(compiled, COLD_VARIANTS, 0)) {

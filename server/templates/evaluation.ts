@@ -12,12 +12,11 @@
  */
 import { LRUCache } from "lru-cache";
 import { evaluateTemplate, ParameterResolutionError, type CompiledTemplate, type EvaluateInput, type Evaluation } from "@/engine";
+import { freezeUnderTest } from "@/engine/freeze";
 import { badRequest } from "@server/lib/errors";
 
 /** Configurations kept per template (an answer with its parts is some tens of kB). */
 const PER_TEMPLATE = 64;
-
-const FREEZE = process.env.NODE_ENV === "test";
 
 const caches = new WeakMap<CompiledTemplate, LRUCache<string, Evaluation>>();
 
@@ -29,14 +28,6 @@ function canonical(value: unknown): string {
     .sort()
     .map((k) => `${JSON.stringify(k)}:${canonical((value as Record<string, unknown>)[k])}`);
   return `{${entries.join(",")}}`;
-}
-
-function deepFreeze<T>(value: T): T {
-  if (value !== null && typeof value === "object" && !Object.isFrozen(value)) {
-    Object.freeze(value);
-    for (const v of Object.values(value)) deepFreeze(v);
-  }
-  return value;
 }
 
 /** The cache key of an evaluation: template id and version, units, values in canonical order. */
@@ -59,8 +50,7 @@ export function evaluateCached(compiled: CompiledTemplate, input: EvaluateInput)
   const hit = cache.get(key);
   if (hit) return hit;
   const evaluation = evaluateTemplate(compiled, input);
-  if (FREEZE) deepFreeze(evaluation);
-  cache.set(key, evaluation);
+  cache.set(key, freezeUnderTest(evaluation));
   return evaluation;
 }
 

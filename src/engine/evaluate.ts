@@ -16,17 +16,18 @@
 import "./calculators";
 import { getCalculator } from "./calculators/registry";
 import { SETUP_CAUTION } from "./calculators/types";
-import { fitPurposeChecks, generalPartIssues, issuesToChecks, runTemplateChecks, DEFAULT_MIN_WALL_MM, type CheckResult } from "./checks";
-import { ExpressionEvaluationError, Unavailable } from "./expressions";
+import { fitPurposeChecks, generalPartIssues, issuesToChecks, runTemplateChecks, DEFAULT_MIN_WALL_MM, type CheckResult, type GeneralCheckOptions } from "./checks";
+import { ExpressionEvaluationError, Unavailable, type Scope } from "./expressions";
+import { freezeUnderTest } from "./freeze";
 import { MATERIAL_KEYS, isMaterialKey, getMaterial } from "./materials";
 import { resolveParameters, type ParameterValue } from "./parameters";
 import { partBoundingBox, partMassKg, partStockEnvelope, partVolumeMm3, type StockEnvelope } from "./parts/analytic";
 import type { Point3, ResolvedPart } from "./parts/features";
 import type { GeometryIssue } from "./parts/issues";
-import { resolveParts } from "./parts/resolve";
+import { placePart, resolvePartShape, unresolvedPart, type ResolvePartsOptions } from "./parts/resolve";
 import { DROPPED, resolveValue, scaleLengths } from "./parts/template-values";
-import { compileTemplate, rememberResult, type CompiledTemplate } from "./template/compile";
-import { resolveNote, type CompiledNote } from "./template/notes";
+import { compileTemplate, rememberResult, scopeKey, type CompiledPart, type CompiledTemplate } from "./template/compile";
+import { resolveNote, type NoteContext } from "./template/notes";
 import type { Template, UnitSystem } from "./template/schema";
 import { convertLength, formatLength } from "./units";
 
@@ -197,38 +198,45 @@ export function evaluateTemplate(template: Template | CompiledTemplate, input: E
   // Template checks and fit purposes.
   const checks: CheckResult[] = [...failures, ...runTemplateChecks(compiled.checks, scope, renderCtx), ...fitPurposeChecks(t.analyses, analyses, units)];
 
-  // Parts.
+  // Parts: each part's shape, checks and summary are remembered by the values it reads (its placement is
+  // worked out every time), so a change that only moves parts does not work them out again.
   const fmt = (mm: number) => formatLength(mm, "mm", units);
-  const partsResult = resolveParts(compiled.parts, scope, { mmPerTemplateUnit: compiled.mmPerTemplateUnit, materialKeys: MATERIAL_KEYS, fmt });
-  const noteCtx = { mmPerTemplateUnit: compiled.mmPerTemplateUnit, render: renderCtx };
-  const notesOf = (list: readonly CompiledNote[] | undefined) => (list ?? []).map((n) => resolveNote(n, scope, noteCtx));
-  for (const part of partsResult.parts) {
-    const own = compiled.notes.parts[part.id];
-    if (own && own.length > 0) part.drawing = { ...part.drawing, notes: notesOf(own) };
-  }
-  const minWallMm = t.rules.minWall !== undefined ? t.rules.minWall * compiled.mmPerTemplateUnit : DEFAULT_MIN_WALL_MM;
+  const partCtx: PartContext = {
+    resolve: { mmPerTemplateUnit: compiled.mmPerTemplateUnit, materialKeys: MATERIAL_KEYS, fmt },
+    notes: { mmPerTemplateUnit: compiled.mmPerTemplateUnit, render: renderCtx },
+    general: { minWallMm: t.rules.minWall !== undefined ? t.rules.minWall * compiled.mmPerTemplateUnit : DEFAULT_MIN_WALL_MM, fmt, ...(t.rules.minThreadEngagement !== undefined ? { minThreadEngagement: t.rules.minThreadEngagement } : {}) },
+    ownNotes: compiled.notes.parts,
+  };
+  const parts: ResolvedPart[] = [];
+  const partSummaries: PartSummary[] = [];
+  const resolveIssues: GeometryIssue[] = [];
   const design: GeometryIssue[] = [];
-  const blocked = new Set(partsResult.blocked);
-  for (const part of partsResult.parts) {
-    if (blocked.has(part.id)) continue;
-    const issues = generalPartIssues(part, { minWallMm, fmt, ...(t.rules.minThreadEngagement !== undefined ? { minThreadEngagement: t.rules.minThreadEngagement } : {}) });
-    design.push(...issues);
-    const hasCuts = part.features.some((f) => f.kind === "hole" || f.kind === "slot" || f.kind === "pocket" || f.kind === "eccentric-bore" || f.kind === "pattern-linear" || f.kind === "pattern-circular" || (f.kind === "thread" && f.form === "internal"));
-    if (issues.length === 0 && hasCuts) {
-      checks.push({
-        id: `engine.walls.${part.id}`,
-        severity: "warning",
-        passed: true,
-        message: `${part.name}: every hole, slot and pocket keeps at least ${fmt(minWallMm)} of wall and nothing breaks out.`,
-        parameters: compiled.parts.find((p) => p.id === part.id)?.parameters ?? [],
-      });
+  const blocked: string[] = [];
+  for (const cp of compiled.parts) {
+    const key = scopeKey(cp.reads, scope, units);
+    const work = (cp.recent.get(key) as PartWork | undefined) ?? rememberResult<unknown>(cp, key, freezeUnderTest(workOutPart(cp, scope, partCtx))) as PartWork;
+    let part: ResolvedPart | undefined;
+    if (work.shape) {
+      try {
+        part = placePart(cp, work.shape, scope, compiled.mmPerTemplateUnit);
+      } catch (err) {
+        const failed = unresolvedPart(cp, err);
+        resolveIssues.push(...failed.issues);
+        blocked.push(cp.id);
+        continue;
+      }
     }
+    resolveIssues.push(...work.issues);
+    if (work.blocked) blocked.push(cp.id);
+    if (!part) continue;
+    parts.push(part);
+    design.push(...work.design);
+    if (work.walls) checks.push(work.walls);
+    partSummaries.push(work.summary!);
   }
-  const geometryIssues = [...partsResult.issues, ...design];
+  const geometryIssues = [...resolveIssues, ...design];
   const paramsOfPart = (id: string) => compiled.parts.find((p) => p.id === id)?.parameters ?? [];
   checks.push(...issuesToChecks(geometryIssues, paramsOfPart));
-
-  const partSummaries = partsResult.parts.map((part) => summarise(part, !blocked.has(part.id)));
 
   const fixtures: FixtureBox[] = [];
   for (const f of compiled.fixtures) {
@@ -251,16 +259,58 @@ export function evaluateTemplate(template: Template | CompiledTemplate, input: E
     analyses,
     checks,
     ok,
-    parts: partsResult.parts,
+    parts,
     partSummaries,
     parametersMm: resolved.valuesMm,
-    buildable: blocked.size === 0,
-    blockedParts: [...blocked],
+    buildable: blocked.length === 0,
+    blockedParts: blocked,
     geometryIssues,
     assembly: { fixtures },
-    drawingNotes: { sheet: notesOf(compiled.notes.sheet), assembly: notesOf(compiled.notes.assembly) },
+    drawingNotes: { sheet: compiled.notes.sheet.map((n) => resolveNote(n, scope, partCtx.notes)), assembly: compiled.notes.assembly.map((n) => resolveNote(n, scope, partCtx.notes)) },
     cautions: [SETUP_CAUTION, ...(t.cautions ?? [])],
   };
+}
+
+interface PartContext {
+  resolve: ResolvePartsOptions;
+  notes: NoteContext;
+  general: GeneralCheckOptions;
+  ownNotes: CompiledTemplate["notes"]["parts"];
+}
+
+/** What one part's shape gives, whatever its placement: remembered per part by the values it reads. */
+interface PartWork {
+  /** The part without its placement, drawing notes filled in; undefined when left out or impossible. */
+  shape?: ResolvedPart;
+  issues: GeometryIssue[];
+  blocked: boolean;
+  /** The engine's design checks (walls, edges, engagement) of a buildable part. */
+  design: GeometryIssue[];
+  /** "Every hole keeps its wall" when the part has cuts and none of them is too close. */
+  walls?: CheckResult;
+  summary?: PartSummary;
+}
+
+function workOutPart(cp: CompiledPart, scope: Scope, ctx: PartContext): PartWork {
+  const outcome = resolvePartShape(cp, scope, ctx.resolve);
+  const part = outcome.part;
+  if (!part) return { issues: outcome.issues, blocked: outcome.blocked, design: [] };
+  const own = ctx.ownNotes[part.id];
+  if (own && own.length > 0) part.drawing = { ...part.drawing, notes: own.map((n) => resolveNote(n, scope, ctx.notes)) };
+  const work: PartWork = { shape: part, issues: outcome.issues, blocked: outcome.blocked, design: [], summary: summarise(part, !outcome.blocked) };
+  if (outcome.blocked) return work;
+  work.design = generalPartIssues(part, ctx.general);
+  const hasCuts = part.features.some((f) => f.kind === "hole" || f.kind === "slot" || f.kind === "pocket" || f.kind === "eccentric-bore" || f.kind === "pattern-linear" || f.kind === "pattern-circular" || (f.kind === "thread" && f.form === "internal"));
+  if (work.design.length === 0 && hasCuts) {
+    work.walls = {
+      id: `engine.walls.${part.id}`,
+      severity: "warning",
+      passed: true,
+      message: `${part.name}: every hole, slot and pocket keeps at least ${ctx.general.fmt(ctx.general.minWallMm)} of wall and nothing breaks out.`,
+      parameters: cp.parameters,
+    };
+  }
+  return work;
 }
 
 function summarise(part: ResolvedPart, buildable: boolean): PartSummary {

@@ -1,6 +1,7 @@
 /** HTTP glue for the template routes: the only code here that touches req/res. */
 import type { RequestHandler } from "express";
 import type { EvaluateRequest } from "@/shared/templates";
+import { sendJsonText } from "@server/lib/json";
 import type { TemplatesService } from "./service";
 
 export function templatesController(service: TemplatesService) {
@@ -12,7 +13,7 @@ export function templatesController(service: TemplatesService) {
     res.json({ template: service.detail(String(req.params.id), query.units) });
   };
   const evaluate: RequestHandler = (req, res) => {
-    res.json(service.evaluate(String(req.params.id), req.body as EvaluateRequest));
+    sendJsonText(res, service.evaluateJson(String(req.params.id), req.body as EvaluateRequest));
   };
   return { list, detail, evaluate };
 }

@@ -126,10 +126,29 @@ export function templatesService(store: TemplateStore) {
 
     /** Evaluates with the user's parameters; 400 with one detail per bad parameter. */
     evaluate(id: string, body: EvaluateRequest): EvaluationDto {
-      const { parts: _parts, geometryIssues: _issues, ...rest } = evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
-      return rest;
+      return evaluationDto(evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) }));
+    },
+
+    /**
+     * {@link evaluate} as JSON text. A remembered evaluation (server/templates/evaluation.ts) keeps its text
+     * too, so a repeated configuration (a reload, a shared link) is not serialised again.
+     */
+    evaluateJson(id: string, body: EvaluateRequest): string {
+      const evaluation = evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
+      let text = jsonOf.get(evaluation);
+      if (text === undefined) jsonOf.set(evaluation, (text = JSON.stringify(evaluationDto(evaluation))));
+      return text;
     },
   };
 }
+
+/** The evaluation as the route answers it: without the resolved parts and their geometry issues. */
+function evaluationDto(evaluation: Evaluation): EvaluationDto {
+  const { parts: _parts, geometryIssues: _issues, ...rest } = evaluation;
+  return rest;
+}
+
+/** JSON text of remembered evaluations, dropped with them. */
+const jsonOf = new WeakMap<Evaluation, string>();
 
 export type TemplatesService = ReturnType<typeof templatesService>;

@@ -215,10 +215,12 @@ export function compileExpression(source: string, options: CompileOptions = {}):
     };
     const [a, b] = args as [Compiled, Compiled | undefined];
     const op = n.op;
+    // The operator as messages name it, made once here: the closures below run on every evaluation.
+    const what = `'${op}'`;
     if (args.length === 1) {
       noStrings();
-      if (n.fn === "unaryMinus") return { fn: (s) => -num(a.fn(s), `'-'`), kind: "number" };
-      if (n.fn === "unaryPlus") return { fn: (s) => num(a.fn(s), `'+'`), kind: "number" };
+      if (n.fn === "unaryMinus") return { fn: (s) => -num(a.fn(s), "'-'"), kind: "number" };
+      if (n.fn === "unaryPlus") return { fn: (s) => num(a.fn(s), "'+'"), kind: "number" };
       if (n.fn === "not") return { fn: (s) => !bool(a.fn(s), "'not'"), kind: "boolean" };
       return refuse(pos(), `the operator '${op}' is not allowed`);
     }
@@ -226,12 +228,12 @@ export function compileExpression(source: string, options: CompileOptions = {}):
     const arith = BINARY[n.fn];
     if (arith) {
       noStrings();
-      return { fn: (s) => finite(arith(num(a.fn(s), `'${op}'`), num(b.fn(s), `'${op}'`)), `'${op}'`), kind: "number" };
+      return { fn: (s) => finite(arith(num(a.fn(s), what), num(b.fn(s), what)), what), kind: "number" };
     }
     const cmp = COMPARE[n.fn];
     if (cmp) {
       noStrings();
-      return { fn: (s) => cmp(num(a.fn(s), `'${op}'`), num(b.fn(s), `'${op}'`)), kind: "boolean" };
+      return { fn: (s) => cmp(num(a.fn(s), what), num(b.fn(s), what)), kind: "boolean" };
     }
     if (n.fn === "equal" || n.fn === "unequal") {
       const want = n.fn === "equal";
@@ -282,12 +284,14 @@ export function compileExpression(source: string, options: CompileOptions = {}):
     }
     const args = n.args.map((a) => compile(a, depth + 1));
     if (args.some((a) => a.kind === "string")) refuse(pos, `${name} takes numbers, not text`);
+    const what = `${name}()`;
     return {
       fn: (s) => {
-        const values = args.map((a) => num(a.fn(s), `${name}()`));
+        const values: number[] = new Array<number>(args.length);
+        for (let i = 0; i < args.length; i++) values[i] = num(args[i]!.fn(s), what);
         const bad = spec.domain?.(values);
         if (bad) fail(bad);
-        return finite(spec.apply(values, factors), `${name}()`);
+        return finite(spec.apply(values, factors), what);
       },
       kind: "number",
     };

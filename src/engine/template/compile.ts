@@ -10,7 +10,7 @@ import { MATERIAL_KEYS } from "../materials";
 import { compileValue, namesIn, type ValueNode } from "../parts/template-values";
 import { mmPerUnit } from "../units";
 import { compileMessage, MessageTemplateError, type CompiledMessage } from "./message";
-import { compileNote, type CompiledNote } from "./notes";
+import { compileNote, noteNames, type CompiledNote } from "./notes";
 import type { AnalysisSpec, CheckSpec, DerivedKind, ParameterSpec, Template } from "./schema";
 import { TemplateValidationError, type TemplateIssue } from "./issues";
 
@@ -46,10 +46,34 @@ const RECENT_RESULTS = 16;
  * give the same result. Later evaluations share the object: nothing may change it (the server's tests
  * run with every kept evaluation frozen, so a change would throw there).
  */
-export function rememberResult(analysis: CompiledAnalysis, key: string, result: Record<string, unknown>): Readonly<Record<string, unknown>> {
-  if (analysis.recent.size >= RECENT_RESULTS) analysis.recent.delete(analysis.recent.keys().next().value!);
-  analysis.recent.set(key, result);
+export function rememberResult<T>(owner: { recent: Map<string, T> }, key: string, result: T): T {
+  if (owner.recent.size >= RECENT_RESULTS) owner.recent.delete(owner.recent.keys().next().value!);
+  owner.recent.set(key, result);
   return result;
+}
+
+/** Identities of the objects in a scope (analysis results), for {@link scopeKey}. */
+const identities = new WeakMap<object, number>();
+let nextIdentity = 0;
+
+/**
+ * A key for the values a scope holds under `names`: numbers, text and true/false by value, objects
+ * (analysis results, which are remembered and so shared while their inputs repeat) by identity. Two
+ * scopes with the same key give the same answer to any expression reading only these names.
+ */
+export function scopeKey(names: readonly string[], scope: Readonly<Record<string, unknown>>, prefix = ""): string {
+  let key = prefix;
+  for (const name of names) {
+    const v = scope[name];
+    if (v !== null && typeof v === "object") {
+      let id = identities.get(v);
+      if (id === undefined) identities.set(v, (id = nextIdentity++));
+      key += `|#${id}`;
+    } else {
+      key += `|${typeof v === "string" ? JSON.stringify(v) : String(v)}`;
+    }
+  }
+  return key;
 }
 
 export interface CompiledCheck {
@@ -62,9 +86,24 @@ export interface CompiledCheck {
 
 export interface CompiledPart {
   id: string;
+  /** The part without its assembly placement (`placement`, `explode`): what its shape depends on. */
   node: ValueNode;
+  /** Where the part sits in the assembly and how far it moves out in the exploded layout, when given. */
+  placement: ReadonlyArray<readonly [key: "placement" | "explode", node: ValueNode]>;
+  /** The part's keys in the template's order (the resolved part keeps it). */
+  keyOrder: readonly string[];
+  /**
+   * Every name (parameter, derived value, analysis) the part's shape and its drawing notes read: the same
+   * values of these give the same part, whatever else changed.
+   */
+  reads: readonly string[];
   /** Parameters the part's expressions depend on (directly or through derived values and analyses). */
   parameters: string[];
+  /**
+   * Recently worked-out parts by the values they read (see {@link rememberResult}): moving the vise stop
+   * for another jaw thickness changes where parts sit, not what they are.
+   */
+  recent: Map<string, unknown>;
 }
 
 export interface CompiledTemplate {
@@ -280,7 +319,21 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
     const geometry = part.drawing ? { ...part, drawing: drawingRest } : part;
     notes.parts[part.id] = compileNotes(partNotes, `${path}.drawing.notes`);
     const node = attempt(path, () => compileValue(geometry, path, undefined, all));
-    if (node) parts.push({ id: part.id, node, parameters: [...paramsOf(namesIn(node, new Set(), ["placement", "explode"]))] });
+    if (node && node.t === "object") {
+      const placement = node.entries.filter((e): e is ["placement" | "explode", ValueNode] => e[0] === "placement" || e[0] === "explode");
+      const shape: ValueNode = { ...node, entries: node.entries.filter((e) => e[0] !== "placement" && e[0] !== "explode") };
+      const reads = namesIn(shape);
+      for (const n of notes.parts[part.id]!) for (const name of noteNames(n)) reads.add(name);
+      parts.push({
+        id: part.id,
+        node: shape,
+        placement,
+        keyOrder: node.entries.map((e) => e[0]),
+        reads: [...reads],
+        parameters: [...paramsOf(namesIn(shape))],
+        recent: new Map(),
+      });
+    }
   });
 
   const fixtures: { id: string; label: string; node: ValueNode }[] = [];

@@ -40,6 +40,12 @@ export function compileNote(source: string, options: CompileOptions): CompiledNo
   return { source, message: compileMessage(source, options) };
 }
 
+/** The names a note's expression or placeholders read. */
+export function noteNames(note: CompiledNote): string[] {
+  if (note.expr) return [...note.expr.names];
+  return (note.message?.pieces ?? []).flatMap((p) => (typeof p === "string" ? [] : p.expr.names));
+}
+
 /** Literal text as note text (braces doubled). */
 export function escapeNoteText(text: string): string {
   return text.replace(/[{}]/g, (c) => c + c);
