@@ -26,7 +26,7 @@ import { escapeNoteText } from "@/engine/template/notes";
 import type { Template } from "@/engine/template/schema";
 import type { KernelPool } from "@server/kernel";
 import type { ProjectTaskInput, ProjectTaskOutput, StepTaskInput, StepTaskOutput, StlTaskInput, StlTaskOutput } from "@server/kernel/tasks";
-import { canonicalHash } from "@server/kernel/canonical";
+import { canonicalHash, partShapeHash } from "@server/kernel/canonical";
 import { shapesToDxf } from "./dxf";
 import { sheetsToPdf } from "./pdf";
 import { sheetToSvg } from "./svg";
@@ -184,13 +184,14 @@ function partInput(pack: Pack, part: ResolvedPart, projected: ProjectedPart, she
 }
 
 /**
- * Projections made recently in this process, by the hash of the part's canonical JSON (the assembly by
- * all its parts): a PDF followed by the DXF or the ZIP of the same design projects each part once.
+ * Projections made recently in this process, by the hash of the part's canonical JSON without its
+ * placement (the assembly by all its parts, placed): a PDF followed by the DXF or the ZIP of the same
+ * design projects each part once, and the next vise's pack re-projects only the parts that changed shape.
  * Bounded by count; a view set is tens of kilobytes.
  */
 const partViews = new LRUCache<string, ProjectedPart>({ max: 256 });
-/** The key of a part's projection: the part and the template's default views (which views get drawn). */
-const partKey = (part: ResolvedPart, views: readonly ViewName[] | undefined) => canonicalHash({ part, views: views ?? null });
+/** The key of a part's projection: the part's shape and the template's default views (which views get drawn). */
+const partKey = (part: ResolvedPart, views: readonly ViewName[] | undefined) => `${partShapeHash(part)}|${views ? views.join(",") : ""}`;
 const assemblyViews = new LRUCache<string, ProjectedAssembly>({ max: 32 });
 const assemblyKey = (parts: ResolvedPart[]) => canonicalHash(parts);
 
@@ -198,6 +199,21 @@ const assemblyKey = (parts: ResolvedPart[]) => canonicalHash(parts);
 export function clearProjectionCache(): void {
   partViews.clear();
   assemblyViews.clear();
+}
+
+/**
+ * A rough cost of projecting a part, to start the slowest first. A cross hole in a turned part (a lever
+ * hole in a cam or nut) meets the round faces in spline curves whose exact hidden-line removal takes
+ * about a second per view here (measured); otherwise the cost grows with the features.
+ */
+export function projectionCost(part: ResolvedPart): number {
+  const turned = part.features[0]?.kind === "turned";
+  let cost = part.features.length;
+  for (const f of part.features) {
+    const direction = "direction" in f ? String(f.direction) : "";
+    if (turned && direction !== "" && !direction.endsWith("z")) cost += 20;
+  }
+  return cost;
 }
 
 /** Projects whatever of `parts` (and the assembly) this request has not projected yet. */
@@ -212,12 +228,14 @@ async function project(pack: Pack, deps: ExportDeps, parts: ResolvedPart[], asse
   }
   const missing = parts.filter((p) => !pack.projected.has(p.id));
   const needAssembly = assembly && !pack.assembly;
-  // One task per part (and one for the assembly), so a pool with several workers projects them at once.
+  // One task per part (and one for the assembly), so a pool with several workers projects them at once;
+  // the slowest go first (longest-first scheduling), so no worker is left with a long task at the end.
   const opts = deps.signal ? { signal: deps.signal } : {};
-  const jobs: Promise<ProjectTaskOutput>[] = missing.map((part) =>
-    deps.kernel.run<ProjectTaskOutput>("project", { parts: [part], ...(pack.defaultViews ? { defaultViews: pack.defaultViews } : {}) } satisfies ProjectTaskInput, opts),
-  );
+  const jobs: Promise<ProjectTaskOutput>[] = [];
   if (needAssembly) jobs.push(deps.kernel.run<ProjectTaskOutput>("project", { parts: [], assembly: { parts: pack.parts } } satisfies ProjectTaskInput, opts));
+  for (const part of [...missing].sort((a, b) => projectionCost(b) - projectionCost(a))) {
+    jobs.push(deps.kernel.run<ProjectTaskOutput>("project", { parts: [part], ...(pack.defaultViews ? { defaultViews: pack.defaultViews } : {}) } satisfies ProjectTaskInput, opts));
+  }
   for (const out of await Promise.all(jobs)) {
     for (const p of out.parts) {
       pack.projected.set(p.partId, p);

@@ -25,3 +25,13 @@ export function canonicalJson(value: unknown): string {
 export function canonicalHash(value: unknown): string {
   return createHash("sha256").update(canonicalJson(value)).digest("hex");
 }
+
+/**
+ * The hash of what a part's solid and its drawing views depend on: the part without its assembly
+ * placement (`placement`, `explode`), so a part that only moves (a thicker jaw slides the cam along its
+ * slot) keeps its remembered solid and projections.
+ */
+export function partShapeHash(part: object): string {
+  const { placement: _placement, explode: _explode, ...shape } = part as Record<string, unknown>;
+  return canonicalHash(shape);
+}

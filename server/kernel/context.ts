@@ -1,6 +1,6 @@
 import type { ResolvedPart } from "@/engine/parts/features";
 import { buildPart, type BuiltPart } from "./build-part";
-import { canonicalHash } from "./canonical";
+import { partShapeHash } from "./canonical";
 import { kernelHeapBytes, type LoadedKernel, type OpenCascade, type Replicad } from "./oc";
 
 /**
@@ -29,7 +29,7 @@ export class PartShapeCache {
   constructor(private readonly maxEntries: number) {}
 
   get(kernel: LoadedKernel, part: ResolvedPart): BuiltPart {
-    const key = canonicalHash(part);
+    const key = partShapeHash(part);
     const hit = this.map.get(key);
     if (hit) {
       this.map.delete(key);

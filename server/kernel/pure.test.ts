@@ -5,7 +5,7 @@
  */
 import { createHash } from "node:crypto";
 import { describe, expect, it } from "vitest";
-import { canonicalHash, canonicalJson } from "./canonical";
+import { canonicalHash, canonicalJson, partShapeHash } from "./canonical";
 import { MODEL_FORMAT_VERSION, modelCacheKey } from "./model-cache";
 import { assemblyMatrix, explodedMatrix, transformPoint } from "./placement";
 import { validatePartForKernel } from "./validate";
@@ -29,6 +29,15 @@ describe("canonical JSON", () => {
     const text = `{"format":${MODEL_FORMAT_VERSION},"parameters":{"gap":3,"jawWidth":100},"template":"cam-vise-stop","version":"1.0.0"}`;
     expect(key).toBe(createHash("sha256").update(text).digest("hex"));
     expect(modelCacheKey("cam-vise-stop", "1.0.1", { jawWidth: 100, gap: 3 })).not.toBe(key);
+  });
+  it("keys a part's solid and views on its shape, not on where the assembly puts it", () => {
+    const cam = { id: "cam", name: "Cam", material: "tool-steel", features: [{ kind: "turned", steps: [{ diameter: 20, length: 8 }] }] };
+    const placed = { ...cam, placement: { position: { x: 0, y: 12, z: 30 } }, explode: { x: 0, y: 0, z: 20 } };
+    const moved = { ...cam, placement: { position: { x: 0, y: 19, z: 30 } } };
+    expect(partShapeHash(placed)).toBe(partShapeHash(moved));
+    expect(partShapeHash(placed)).toBe(canonicalHash(cam));
+    const larger = { ...moved, features: [{ kind: "turned", steps: [{ diameter: 24, length: 8 }] }] };
+    expect(partShapeHash(larger)).not.toBe(partShapeHash(moved));
   });
 });
 
