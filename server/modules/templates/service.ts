@@ -135,9 +135,7 @@ export function templatesService(store: TemplateStore) {
      */
     evaluateJson(id: string, body: EvaluateRequest): string {
       const evaluation = evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });
-      let text = jsonOf.get(evaluation);
-      if (text === undefined) jsonOf.set(evaluation, (text = JSON.stringify(evaluationDto(evaluation))));
-      return text;
+      return sharedJson(evaluation, evaluationJson);
     },
   };
 }
@@ -148,7 +146,39 @@ function evaluationDto(evaluation: Evaluation): EvaluationDto {
   return rest;
 }
 
-/** JSON text of remembered evaluations, dropped with them. */
-const jsonOf = new WeakMap<Evaluation, string>();
+/**
+ * JSON text of objects the engine and the server remember and share (evaluations, calculator results,
+ * part summaries), dropped with them. A form change usually leaves most analyses and parts as they were
+ * (the same objects), so only what changed is serialised again.
+ */
+const jsonOf = new WeakMap<object, string>();
+
+function sharedJson<T extends object>(value: T, write: (value: T) => string = JSON.stringify): string {
+  let text = jsonOf.get(value);
+  if (text === undefined) jsonOf.set(value, (text = write(value)));
+  return text;
+}
+
+/**
+ * `JSON.stringify(evaluationDto(evaluation))`, byte for byte, with the text of shared analyses and part
+ * summaries reused.
+ */
+export function evaluationJson(evaluation: Evaluation): string {
+  const members: string[] = [];
+  for (const [key, value] of Object.entries(evaluationDto(evaluation))) {
+    if (value === undefined) continue;
+    let text: string;
+    if (key === "analyses") {
+      const entries = Object.entries(value as Evaluation["analyses"]).filter(([, r]) => r !== undefined);
+      text = `{${entries.map(([id, r]) => `${JSON.stringify(id)}:${sharedJson(r)}`).join(",")}}`;
+    } else if (key === "partSummaries") {
+      text = `[${(value as Evaluation["partSummaries"]).map((p) => sharedJson(p)).join(",")}]`;
+    } else {
+      text = JSON.stringify(value);
+    }
+    members.push(`${JSON.stringify(key)}:${text}`);
+  }
+  return `{${members.join(",")}}`;
+}
 
 export type TemplatesService = ReturnType<typeof templatesService>;

@@ -223,32 +223,52 @@ function chamferVolume(f: ChamferFeature, base: BaseGeometry): number {
     }
     return v;
   }
+  const t = chamferTopology(f.faces);
+  let v = 0;
+  for (const along of t.along) v += ((c * c) / 2) * (base.max[along] - base.min[along]);
+  return v - (t.cornersOfTwo * c * c * c) / 3 - (t.cornersOfThree * 3 * c * c * c) / 4;
+}
+
+/** Which box edges a set of chamfered faces breaks (by the axis each runs along), and at how many corners two or three of them meet. */
+interface ChamferTopology {
+  along: Array<(typeof AXIS_LIST)[number]>;
+  cornersOfTwo: number;
+  cornersOfThree: number;
+}
+
+/** By the sorted face list: the topology depends only on which of the six faces are chamfered. */
+const chamferTopologies = new Map<string, ChamferTopology>();
+
+function chamferTopology(faces: readonly string[]): ChamferTopology {
+  const unique = [...new Set(faces)].sort();
+  const id = unique.join(" ");
+  const known = chamferTopologies.get(id);
+  if (known) return known;
   // Edges of the box: an edge runs along one axis at the min or max side of the other two.
-  const edges = new Map<string, { along: string; length: number; corners: string[] }>();
-  for (const face of new Set(f.faces)) {
-    const n = axisOf(face);
+  const edges = new Map<string, { along: (typeof AXIS_LIST)[number]; corners: string[] }>();
+  for (const face of unique) {
+    const n = axisOf(face as Parameters<typeof axisOf>[0]);
     const nSide = face[0] === "+" ? "max" : "min";
     for (const along of AXIS_LIST.filter((a) => a !== n)) {
       const other = AXIS_LIST.find((a) => a !== n && a !== along)!;
       for (const oSide of ["min", "max"] as const) {
         const sides: Record<string, string> = { [n]: nSide, [other]: oSide };
         const key = `${along}|${AXIS_LIST.filter((a) => a !== along).map((a) => `${a}${sides[a]}`).join(",")}`;
-        const corners = (["min", "max"] as const).map((s) => AXIS_LIST.map((a) => (a === along ? s : sides[a])).join(","));
-        edges.set(key, { along, length: base.max[along] - base.min[along], corners });
+        const corners = (["min", "max"] as const).map((side) => AXIS_LIST.map((a) => (a === along ? side : sides[a])).join(","));
+        edges.set(key, { along, corners });
       }
     }
   }
-  let v = 0;
   const cornerCount = new Map<string, number>();
-  for (const e of edges.values()) {
-    v += ((c * c) / 2) * e.length;
-    for (const k of e.corners) cornerCount.set(k, (cornerCount.get(k) ?? 0) + 1);
-  }
-  for (const n of cornerCount.values()) {
-    if (n === 2) v -= (c * c * c) / 3;
-    else if (n === 3) v -= (3 * c * c * c) / 4;
-  }
-  return v;
+  for (const e of edges.values()) for (const k of e.corners) cornerCount.set(k, (cornerCount.get(k) ?? 0) + 1);
+  const counts = [...cornerCount.values()];
+  const topology: ChamferTopology = {
+    along: [...edges.values()].map((e) => e.along),
+    cornersOfTwo: counts.filter((n) => n === 2).length,
+    cornersOfThree: counts.filter((n) => n === 3).length,
+  };
+  chamferTopologies.set(id, topology);
+  return topology;
 }
 
 // --- radial cross holes in a turned step, by Gauss–Legendre quadrature ---
