@@ -96,16 +96,43 @@ export function classifySamples(points: ViewPoint[], tolMm = CLASSIFY_TOLERANCE_
   const chord = dist(first, last);
   const straight = asLine(points, tolMm);
   if (straight) return straight;
-  // A closed run (start = end) is tested against the circle through three spread-out samples.
-  const third = points[Math.floor(points.length / 3)]!;
-  const twoThirds = points[Math.floor((2 * points.length) / 3)]!;
-  const [p, q, r] = chord > tolMm ? [first, mid, last] : [first, third, twoThirds];
-  const centre = circumcentre(p, q, r);
+  if (chord <= tolMm) return classifyClosed(points, tolMm);
+  const centre = circumcentre(first, mid, last);
   if (centre) {
-    const radius = dist(centre, p);
-    if (points.every((pt) => Math.abs(dist(centre, pt) - radius) <= tolMm)) {
-      return arcThrough(centre, radius, first, mid, last, tolMm);
-    }
+    const radius = dist(centre, first);
+    if (points.every((pt) => Math.abs(dist(centre, pt) - radius) <= tolMm)) return arcThrough(centre, radius, first, mid, last, tolMm);
   }
   return { type: "polyline", points };
+}
+
+/**
+ * A run that ends where it starts: once around a circle, or out along a curve and back over it (a cross
+ * hole's edge on a round face, seen along that face's axis, doubles back over an arc of the face's
+ * outline); that one is drawn as the part out to the turning point.
+ */
+function classifyClosed(points: ViewPoint[], tolMm: number): ViewCurve {
+  const first = points[0]!;
+  const third = points[Math.floor(points.length / 3)]!;
+  const twoThirds = points[Math.floor((2 * points.length) / 3)]!;
+  const centre = circumcentre(first, third, twoThirds);
+  if (centre) {
+    const radius = dist(centre, first);
+    if (Math.abs(sweepDeg(centre, points)) >= 350 && points.every((pt) => Math.abs(dist(centre, pt) - radius) <= tolMm)) return { type: "circle", centre, radius };
+  }
+  const turn = points.reduce((far, pt) => (dist(first, pt) > dist(first, far) ? pt : far), first);
+  const out = points.slice(0, points.indexOf(turn) + 1);
+  if (out.length >= 2 && out.length < points.length && dist(first, turn) > tolMm) return classifySamples(out, tolMm);
+  return { type: "polyline", points };
+}
+
+/** The signed angle the points turn through about `centre`, degrees (±360 once around). */
+function sweepDeg(centre: ViewPoint, points: ViewPoint[]): number {
+  let sweep = 0;
+  for (let i = 1; i < points.length; i++) {
+    let d = angleDeg(centre, points[i]!) - angleDeg(centre, points[i - 1]!);
+    if (d > 180) d -= 360;
+    if (d < -180) d += 360;
+    sweep += d;
+  }
+  return sweep;
 }

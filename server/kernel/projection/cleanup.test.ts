@@ -46,6 +46,21 @@ describe("classifySamples", () => {
     expect(c.startDeg).toBeCloseTo(0, 4);
     expect(c.endDeg).toBeCloseTo(90, 4);
   });
+  it("a spline that runs out along an arc and back is that arc, not a whole circle (a cross hole's edge on a round face, seen along the face's axis)", () => {
+    // Radius 9 about (60, 28), from 0° out to 12° and back to 0°: the arc 0°–12°.
+    const angles = [0, 2, 4, 6, 8, 10, 12, 10, 8, 6, 4, 2, 0];
+    const pts = angles.map((d) => ({ x: 60 + 9 * Math.cos((d * Math.PI) / 180), y: 28 + 9 * Math.sin((d * Math.PI) / 180) }));
+    const c = classifySamples(pts);
+    expect(c.type).toBe("arc");
+    if (c.type !== "arc") return;
+    expect(c.radius).toBeCloseTo(9, 6);
+    expect(c.startDeg).toBeCloseTo(0, 4);
+    expect(c.endDeg).toBeCloseTo(12, 4);
+  });
+  it("a closed run once around is still a whole circle", () => {
+    const pts = Array.from({ length: 25 }, (_, i) => ({ x: 3 * Math.cos((i / 24) * 2 * Math.PI), y: 3 * Math.sin((i / 24) * 2 * Math.PI) }));
+    expect(classifySamples(pts)).toMatchObject({ type: "circle", radius: expect.closeTo(3, 6) });
+  });
   it("a curve that is neither stays a polyline", () => {
     const pts = [0, 1, 2, 3, 4].map((x) => ({ x, y: x * x }));
     expect(classifySamples(pts).type).toBe("polyline");
