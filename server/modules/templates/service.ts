@@ -148,7 +148,7 @@ function evaluationDto(evaluation: Evaluation): EvaluationDto {
 
 /**
  * JSON text of objects the engine and the server remember and share (evaluations, calculator results,
- * part summaries), dropped with them. A form change usually leaves most analyses and parts as they were
+ * part summaries, check results), dropped with them. A form change usually leaves most analyses and parts as they were
  * (the same objects), so only what changed is serialised again.
  */
 const jsonOf = new WeakMap<object, string>();
@@ -160,8 +160,8 @@ function sharedJson<T extends object>(value: T, write: (value: T) => string = JS
 }
 
 /**
- * `JSON.stringify(evaluationDto(evaluation))`, byte for byte, with the text of shared analyses and part
- * summaries reused.
+ * `JSON.stringify(evaluationDto(evaluation))`, byte for byte, with the text of shared analyses, part
+ * summaries and check results reused.
  */
 export function evaluationJson(evaluation: Evaluation): string {
   const members: string[] = [];
@@ -171,8 +171,8 @@ export function evaluationJson(evaluation: Evaluation): string {
     if (key === "analyses") {
       const entries = Object.entries(value as Evaluation["analyses"]).filter(([, r]) => r !== undefined);
       text = `{${entries.map(([id, r]) => `${JSON.stringify(id)}:${sharedJson(r)}`).join(",")}}`;
-    } else if (key === "partSummaries") {
-      text = `[${(value as Evaluation["partSummaries"]).map((p) => sharedJson(p)).join(",")}]`;
+    } else if (key === "partSummaries" || key === "checks") {
+      text = `[${(value as object[]).map((item) => sharedJson(item)).join(",")}]`;
     } else {
       text = JSON.stringify(value);
     }

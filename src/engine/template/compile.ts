@@ -82,6 +82,15 @@ export interface CompiledCheck {
   message: CompiledMessage;
   failMessage?: CompiledMessage;
   when?: CompiledExpression | boolean;
+  /** Every name its condition, `when` and messages read: the same values give the same result. */
+  reads: readonly string[];
+  /** Recent results by the values it reads and the units (null: did not apply); see {@link rememberResult}. */
+  recent: Map<string, unknown>;
+}
+
+/** The names a message's placeholders read. */
+function messageNames(message: CompiledMessage | undefined): string[] {
+  return (message?.pieces ?? []).flatMap((p) => (typeof p === "string" ? [] : p.expr.names));
 }
 
 export interface CompiledPart {
@@ -284,7 +293,8 @@ export function compileTemplate(template: Template, deps: CompileDeps): Compiled
       if (!parameterKeys.has(p)) issues.push({ path: `${path}.parameters[${j}]`, message: `"${p}" is not a parameter of this template.` });
     });
     if (condition !== undefined && message) {
-      checks.push({ spec, condition, message, ...(failMessage ? { failMessage } : {}), ...(when !== undefined ? { when } : {}) });
+      const reads = new Set([...(typeof condition === "boolean" ? [] : condition.names), ...(when === undefined || typeof when === "boolean" ? [] : when.names), ...messageNames(message), ...messageNames(failMessage)]);
+      checks.push({ spec, condition, message, ...(failMessage ? { failMessage } : {}), ...(when !== undefined ? { when } : {}), reads: [...reads], recent: new Map() });
     }
   });
 
