@@ -124,14 +124,11 @@ export function templatesService(store: TemplateStore) {
       };
     },
 
-    /** Evaluates with the user's parameters; 400 with one detail per bad parameter. */
-    evaluate(id: string, body: EvaluateRequest): EvaluationDto {
-      return evaluationDto(evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) }));
-    },
-
     /**
-     * {@link evaluate} as JSON text. A remembered evaluation (server/templates/evaluation.ts) keeps its text
-     * too, so a repeated configuration (a reload, a shared link) is not serialised again.
+     * Evaluates with the user's parameters (400 with one detail per bad parameter) and answers the
+     * evaluation as the route sends it (without the resolved parts), as JSON text. A remembered evaluation
+     * (server/templates/evaluation.ts) keeps its text too, so a repeated configuration (a reload, a shared
+     * link) is not serialised again.
      */
     evaluateJson(id: string, body: EvaluateRequest): string {
       const evaluation = evaluateForRequest(find(id), { parameters: body.parameters, ...(body.units ? { units: body.units } : {}) });

@@ -9,7 +9,7 @@ import { compileExpression, ExpressionError, RESERVED_NAMES, type CompiledExpres
 import { MATERIAL_KEYS } from "../materials";
 import { compileValue, namesIn, type ValueNode } from "../parts/template-values";
 import { mmPerUnit } from "../units";
-import { compileMessage, MessageTemplateError, type CompiledMessage } from "./message";
+import { compileMessage, messageNames, MessageTemplateError, type CompiledMessage } from "./message";
 import { compileNote, noteNames, type CompiledNote } from "./notes";
 import type { AnalysisSpec, CheckSpec, DerivedKind, ParameterSpec, Template } from "./schema";
 import { TemplateValidationError, type TemplateIssue } from "./issues";
@@ -88,10 +88,6 @@ export interface CompiledCheck {
   recent: Map<string, unknown>;
 }
 
-/** The names a message's placeholders read. */
-function messageNames(message: CompiledMessage | undefined): string[] {
-  return (message?.pieces ?? []).flatMap((p) => (typeof p === "string" ? [] : p.expr.names));
-}
 
 export interface CompiledPart {
   id: string;

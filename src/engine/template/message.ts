@@ -27,6 +27,11 @@ export interface CompiledMessage {
   pieces: MessagePiece[];
 }
 
+/** The names a message's placeholders read. */
+export function messageNames(message: CompiledMessage | undefined): string[] {
+  return (message?.pieces ?? []).flatMap((p) => (typeof p === "string" ? [] : p.expr.names));
+}
+
 const SPEC_RE = /^(?:(len|angle|force|num|int|pct|yesno|text)(?:\.(\d))?|\.(\d))$/;
 
 export class MessageTemplateError extends Error {

@@ -14,7 +14,7 @@
  * other placeholder is already rendered by then.
  */
 import { compileExpression, type CompileOptions, type CompiledExpression, type Scope } from "../expressions";
-import { compileMessage, formatValue, MessageTemplateError, type CompiledMessage, type RenderContext } from "./message";
+import { compileMessage, formatValue, messageNames, MessageTemplateError, type CompiledMessage, type RenderContext } from "./message";
 
 export interface CompiledNote {
   source: string;
@@ -42,8 +42,7 @@ export function compileNote(source: string, options: CompileOptions): CompiledNo
 
 /** The names a note's expression or placeholders read. */
 export function noteNames(note: CompiledNote): string[] {
-  if (note.expr) return [...note.expr.names];
-  return (note.message?.pieces ?? []).flatMap((p) => (typeof p === "string" ? [] : p.expr.names));
+  return note.expr ? [...note.expr.names] : messageNames(note.message);
 }
 
 /** Literal text as note text (braces doubled). */

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { Link } from "react-router";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { Spinner } from "@/components/ui/spinner";
+import { QueryStatus } from "@/components/ui/query-status";
 import type { Design } from "@/shared/designs";
 import { useDeleteDesign } from "../api/delete-design";
 import { useDesigns } from "../api/get-designs";
@@ -65,15 +65,7 @@ export function DesignsPage({
         {status?.kind === "fault" ? <Notice tone="fault">{status.text}</Notice> : null}
       </div>
 
-      {designs.isPending ? <Spinner label="Loading your designs" /> : null}
-      {designs.isError ? (
-        <Notice tone="fault" title="Your designs could not be loaded">
-          <p>{designs.error.message}</p>
-          <Button variant="secondary" className="mt-2" onClick={() => designs.refetch()}>
-            Try again
-          </Button>
-        </Notice>
-      ) : null}
+      <QueryStatus query={designs} loading="Loading your designs" failed="Your designs could not be loaded" />
       {designs.data && designs.data.length === 0 ? (
         <div className="rounded-lg border border-dashed border-steel-300 bg-white px-4 py-8 text-center">
           <p className="text-lg font-semibold">

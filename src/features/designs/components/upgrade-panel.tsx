@@ -1,7 +1,6 @@
 import { Link } from "react-router";
-import { Button, buttonClasses } from "@/components/ui/button";
-import { Notice } from "@/components/ui/notice";
-import { Spinner } from "@/components/ui/spinner";
+import { buttonClasses } from "@/components/ui/button";
+import { QueryStatus } from "@/components/ui/query-status";
 import type { DesignUpgrade } from "@/shared/design-upgrade";
 import type { Design } from "@/shared/designs";
 import { useDesignUpgrade } from "../api/get-design-upgrade";
@@ -25,15 +24,11 @@ export function UpgradePanel({ design }: { design: Design }) {
       <h4 id={headingId} className="text-lg font-semibold">
         What changes on version {design.newerVersion}
       </h4>
-      {upgrade.isPending ? <Spinner label="Comparing the two versions" /> : null}
-      {upgrade.isError ? (
-        <Notice tone="fault" title="The versions could not be compared">
-          <p>{upgrade.error.message}</p>
-          <Button variant="secondary" className="mt-2" onClick={() => upgrade.refetch()}>
-            Try again
-          </Button>
-        </Notice>
-      ) : null}
+      <QueryStatus
+        query={upgrade}
+        loading="Comparing the two versions"
+        failed="The versions could not be compared"
+      />
       {upgrade.data ? <UpgradeReport design={design} report={upgrade.data} /> : null}
     </section>
   );

@@ -1,6 +1,4 @@
-import { Button } from "@/components/ui/button";
-import { Notice } from "@/components/ui/notice";
-import { Spinner } from "@/components/ui/spinner";
+import { QueryStatus } from "@/components/ui/query-status";
 import { machineFieldsSchema } from "@/shared/profiles";
 import { useCreateMachine } from "../api/create-machine";
 import { useDeleteMachine } from "../api/delete-machine";
@@ -26,15 +24,11 @@ export function MachinesSection() {
           guidance when you choose a speed. "Works in" records the units you set the machine up in.
         </p>
       </div>
-      {machines.isPending ? <Spinner label="Loading your machines" /> : null}
-      {machines.isError ? (
-        <Notice tone="fault" title="Your machines could not be loaded">
-          <p>{machines.error.message}</p>
-          <Button variant="secondary" className="mt-2" onClick={() => machines.refetch()}>
-            Try again
-          </Button>
-        </Notice>
-      ) : null}
+      <QueryStatus
+        query={machines}
+        loading="Loading your machines"
+        failed="Your machines could not be loaded"
+      />
       {machines.data ? (
         <ProfileTable
           caption="Your machines"

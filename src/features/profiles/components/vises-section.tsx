@@ -1,6 +1,4 @@
-import { Button } from "@/components/ui/button";
-import { Notice } from "@/components/ui/notice";
-import { Spinner } from "@/components/ui/spinner";
+import { QueryStatus } from "@/components/ui/query-status";
 import { viseFieldsSchema } from "@/shared/profiles";
 import { useCreateVise } from "../api/create-vise";
 import { useDeleteVise } from "../api/delete-vise";
@@ -26,15 +24,7 @@ export function VisesSection() {
           jaws open. All sizes are in millimetres.
         </p>
       </div>
-      {vises.isPending ? <Spinner label="Loading your vises" /> : null}
-      {vises.isError ? (
-        <Notice tone="fault" title="Your vises could not be loaded">
-          <p>{vises.error.message}</p>
-          <Button variant="secondary" className="mt-2" onClick={() => vises.refetch()}>
-            Try again
-          </Button>
-        </Notice>
-      ) : null}
+      <QueryStatus query={vises} loading="Loading your vises" failed="Your vises could not be loaded" />
       {vises.data ? (
         <ProfileTable
           caption="Your vises, sizes in millimetres"
