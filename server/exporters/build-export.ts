@@ -203,8 +203,9 @@ export function clearProjectionCache(): void {
 
 /**
  * A rough cost of projecting a part, to start the slowest first. A cross hole in a turned part (a lever
- * hole in a cam or nut) meets the round faces in spline curves whose exact hidden-line removal takes
- * about a second per view here (measured); otherwise the cost grows with the features.
+ * hole in a cam or nut) meets the round faces in spline curves: those views are drawn by sight lines
+ * (server/kernel/projection/sightlines.ts), 30–250 ms each here, still the longest part tasks; otherwise
+ * the cost grows with the features.
  */
 export function projectionCost(part: ResolvedPart): number {
   const turned = part.features[0]?.kind === "turned";

@@ -1,4 +1,4 @@
-import type { Shape3D } from "replicad";
+import type { AnyShape, Shape3D } from "replicad";
 import type { LoadedKernel } from "./oc";
 
 /** Triangles of one part for the 3D preview and STL, in part-local millimetres. */
@@ -60,7 +60,7 @@ export function meshShape(kernel: LoadedKernel, shape: Shape3D, options: MeshOpt
  * Only the triangles (positions and indices, no normals or edge lines) of the exact solid: for work that
  * needs the surface but never shows it (which part the viewer sees where on an assembly drawing).
  */
-export function meshTriangles(kernel: LoadedKernel, shape: Shape3D, options: MeshOptions): Pick<MeshData, "positions" | "indices"> {
+export function meshTriangles(kernel: LoadedKernel, shape: Pick<AnyShape, "wrapped">, options: MeshOptions): Pick<MeshData, "positions" | "indices"> {
   const { oc } = kernel;
   const raw = oc.ReplicadMeshExtractor.extract(shape.wrapped, options.toleranceMm, options.angularTolerance, false);
   try {

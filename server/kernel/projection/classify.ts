@@ -18,6 +18,15 @@ function distanceToLine(p: ViewPoint, a: ViewPoint, b: ViewPoint): number {
   return Math.abs((b.x - a.x) * (a.y - p.y) - (a.x - p.x) * (b.y - a.y)) / len;
 }
 
+/** Distance of p from the segment ab. */
+export function distanceToSegment(p: ViewPoint, a: ViewPoint, b: ViewPoint): number {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const len2 = dx * dx + dy * dy;
+  const f = len2 > 0 ? Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2)) : 0;
+  return Math.hypot(p.x - a.x - f * dx, p.y - a.y - f * dy);
+}
+
 /** Circumcentre of three points, or undefined when they are (nearly) collinear. */
 export function circumcentre(a: ViewPoint, b: ViewPoint, c: ViewPoint): ViewPoint | undefined {
   const d = 2 * (a.x * (b.y - c.y) + b.x * (c.y - a.y) + c.x * (a.y - b.y));
@@ -121,7 +130,9 @@ function classifyClosed(points: ViewPoint[], tolMm: number): ViewCurve {
   }
   const turn = points.reduce((far, pt) => (dist(first, pt) > dist(first, far) ? pt : far), first);
   const out = points.slice(0, points.indexOf(turn) + 1);
-  if (out.length >= 2 && out.length < points.length && dist(first, turn) > tolMm) return classifySamples(out, tolMm);
+  // Only when the way back retraces the way out: a closed loop (an ellipse) is not halved.
+  const retraced = points.slice(out.length).every((pt) => out.some((q, i) => i > 0 && distanceToSegment(pt, out[i - 1]!, q) <= 10 * tolMm));
+  if (out.length >= 2 && out.length < points.length && dist(first, turn) > tolMm && retraced) return classifySamples(out, tolMm);
   return { type: "polyline", points };
 }
 

@@ -4,11 +4,13 @@
  *    so on every straight carrier line and every circle the visible intervals are subtracted from the
  *    hidden ones;
  *  - edges repeated on the same carrier (the back outline repeats the front one) are merged, and touching
- *    collinear pieces join into one line, so each drawn line is one entity in SVG/DXF.
+ *    collinear pieces join into one line, so each drawn line is one entity in SVG/DXF;
+ *  - a piece lying wholly on one visible edge of another kind (a short chord on a visible circle, a curve
+ *    on its visible twin) is dropped too, hidden or visible: it would be drawn twice.
  * Pure geometry on the view's 2D frame.
  */
 import type { ViewCurve, ViewEdge, ViewPoint } from "@/engine/drawing/projection";
-import { norm360 } from "./classify";
+import { distanceToSegment, norm360 } from "./classify";
 
 /** Same-carrier and coincidence tolerance, mm. */
 export const CLEANUP_TOLERANCE_MM = 1e-3;
@@ -36,7 +38,7 @@ interface Group<C> {
   hidden: Interval[];
 }
 
-function lineCarrier(from: ViewPoint, to: ViewPoint): { carrier: LineCarrier; interval: Interval } | undefined {
+function lineCarrier(from: ViewPoint, to: ViewPoint): { carrier: LineCarrier } | undefined {
   let ux = to.x - from.x;
   let uy = to.y - from.y;
   const len = Math.hypot(ux, uy);
@@ -48,14 +50,20 @@ function lineCarrier(from: ViewPoint, to: ViewPoint): { carrier: LineCarrier; in
     uy = -uy;
   }
   const offset = -uy * from.x + ux * from.y;
-  const t0 = ux * from.x + uy * from.y;
-  const t1 = ux * to.x + uy * to.y;
-  return { carrier: { ux, uy, offset }, interval: [Math.min(t0, t1), Math.max(t0, t1)] };
+  return { carrier: { ux, uy, offset } };
 }
 
-function sameLine(a: LineCarrier, b: LineCarrier, tol: number): boolean {
-  // Parallel (cross product of unit vectors within tol over a 1000 mm reach) and on the same offset.
-  return Math.abs(a.ux * b.uy - a.uy * b.ux) < tol / 1000 && Math.abs(a.offset - b.offset) < tol;
+/** Distance of a point from a carrier line. */
+function offLine(c: LineCarrier, p: ViewPoint): number {
+  return Math.abs(-c.uy * p.x + c.ux * p.y - c.offset);
+}
+
+/**
+ * A segment lies on a carrier when both its ends are within tol of the carrier line (so it is parallel
+ * to within 2·tol over its own length — segments shorter than MIN_PIECE_MM never get here).
+ */
+function onLine(c: LineCarrier, from: ViewPoint, to: ViewPoint, tol: number): boolean {
+  return offLine(c, from) < tol && offLine(c, to) < tol;
 }
 
 function sameCircle(a: CircleCarrier, b: CircleCarrier, tol: number): boolean {
@@ -109,8 +117,8 @@ function angularIntervals(curve: ViewCurve): Interval[] {
   ];
 }
 
-function findOrAdd<C>(groups: Group<C>[], carrier: C, same: (a: C, b: C) => boolean): Group<C> {
-  let g = groups.find((x) => same(x.carrier, carrier));
+function findOrAdd<C>(groups: Group<C>[], carrier: C, same: (existing: C) => boolean): Group<C> {
+  let g = groups.find((x) => same(x.carrier));
   if (!g) {
     g = { carrier, visible: [], hidden: [] };
     groups.push(g);
@@ -160,9 +168,14 @@ export function cleanEdges(raw: ViewEdge[], tol = CLEANUP_TOLERANCE_MM): ViewEdg
     if (c.type === "line") {
       const lc = lineCarrier(c.from, c.to);
       if (!lc) continue;
-      findOrAdd(lines, lc.carrier, (a, b) => sameLine(a, b, tol))[edge.visibility].push(lc.interval);
+      const g = findOrAdd(lines, lc.carrier, (x) => onLine(x, c.from, c.to, tol));
+      // Measured along the group's own carrier: a nearly vertical segment may point the other way.
+      const t0 = g.carrier.ux * c.from.x + g.carrier.uy * c.from.y;
+      const t1 = g.carrier.ux * c.to.x + g.carrier.uy * c.to.y;
+      g[edge.visibility].push([Math.min(t0, t1), Math.max(t0, t1)]);
     } else if (c.type === "circle" || c.type === "arc") {
-      const g = findOrAdd(circles, { centre: c.centre, radius: c.radius }, (a, b) => sameCircle(a, b, tol));
+      const carrier = { centre: c.centre, radius: c.radius };
+      const g = findOrAdd(circles, carrier, (x) => sameCircle(x, carrier, tol));
       g[edge.visibility].push(...angularIntervals(c));
     } else {
       polylines.push(edge);
@@ -183,7 +196,59 @@ export function cleanEdges(raw: ViewEdge[], tol = CLEANUP_TOLERANCE_MM): ViewEdg
     out.push(...circleEdges(g, "visible", vis, angTol));
     hiddenOut.push(...circleEdges(g, "hidden", hid, angTol));
   }
-  return [...out, ...polylines.filter((p) => p.visibility === "visible"), ...hiddenOut, ...polylines.filter((p) => p.visibility === "hidden")];
+  // Longest first, so that of two copies of a line the longer (or first) stays.
+  const visible: ViewEdge[] = [];
+  for (const v of [...out, ...polylines.filter((p) => p.visibility === "visible")].sort((a, b) => curveLength(b.curve) - curveLength(a.curve))) {
+    if (!coveredByOne(v.curve, visible, 2 * tol)) visible.push(v);
+  }
+  const hidden = [...hiddenOut, ...polylines.filter((p) => p.visibility === "hidden")];
+  return [...visible, ...hidden.filter((h) => !coveredByOne(h.curve, visible, 2 * tol))];
+}
+
+/** Length of a drawn curve, mm. */
+function curveLength(c: ViewCurve): number {
+  if (c.type === "line") return Math.hypot(c.to.x - c.from.x, c.to.y - c.from.y);
+  if (c.type === "polyline") return c.points.reduce((sum, p, i) => (i === 0 ? 0 : sum + Math.hypot(p.x - c.points[i - 1]!.x, p.y - c.points[i - 1]!.y)), 0);
+  return ((c.type === "circle" ? 360 : c.endDeg - c.startDeg) * Math.PI * c.radius) / 180;
+}
+
+/**
+ * Whether a piece lies wholly on one of the visible edges (a short chord on a visible circle, a curve on
+ * its visible twin): the carriers above only compare like with like.
+ */
+function coveredByOne(curve: ViewCurve, visible: ViewEdge[], tol: number): boolean {
+  const probe = probePoints(curve);
+  return visible.some((v) => probe.every((p) => distanceToCurve(p, v.curve) <= tol));
+}
+
+/** A few points along a curve: its ends and three between. */
+function probePoints(c: ViewCurve): ViewPoint[] {
+  const fractions = [0, 0.25, 0.5, 0.75, 1];
+  if (c.type === "line") return fractions.map((f) => ({ x: c.from.x + (c.to.x - c.from.x) * f, y: c.from.y + (c.to.y - c.from.y) * f }));
+  if (c.type === "polyline") return fractions.map((f) => c.points[Math.round(f * (c.points.length - 1))]!);
+  const s = c.type === "arc" ? c.startDeg : 0;
+  const e = c.type === "arc" ? c.endDeg : 360;
+  return fractions.map((f) => {
+    const a = ((s + (e - s) * f) * Math.PI) / 180;
+    return { x: c.centre.x + c.radius * Math.cos(a), y: c.centre.y + c.radius * Math.sin(a) };
+  });
+}
+
+/** Distance from a point to a drawn curve, mm. */
+export function distanceToCurve(p: ViewPoint, c: ViewCurve): number {
+  if (c.type === "line") return distanceToSegment(p, c.from, c.to);
+  if (c.type === "polyline") {
+    let best = Infinity;
+    for (let i = 1; i < c.points.length; i++) best = Math.min(best, distanceToSegment(p, c.points[i - 1]!, c.points[i]!));
+    return best;
+  }
+  const r = Math.hypot(p.x - c.centre.x, p.y - c.centre.y);
+  if (c.type === "circle") return Math.abs(r - c.radius);
+  const span = norm360(c.endDeg - c.startDeg) || 360;
+  const along = norm360((Math.atan2(p.y - c.centre.y, p.x - c.centre.x) * 180) / Math.PI - c.startDeg);
+  if (along <= span) return Math.abs(r - c.radius);
+  const end = (deg: number) => ({ x: c.centre.x + c.radius * Math.cos((deg * Math.PI) / 180), y: c.centre.y + c.radius * Math.sin((deg * Math.PI) / 180) });
+  return Math.min(Math.hypot(p.x - end(c.startDeg).x, p.y - end(c.startDeg).y), Math.hypot(p.x - end(c.endDeg).x, p.y - end(c.endDeg).y));
 }
 
 /** Bounding box of edges (arcs by their extreme points). */

@@ -5,6 +5,7 @@ import { visibleAnchors, type PartTriangles } from "@/engine/drawing/assemblyAnc
 import { viewFrame, viewsForPart } from "@/engine/drawing/views";
 import { assemblyMatrix, transformPoint } from "../placement";
 import { projectShape } from "../projection/projectShape";
+import { SIGHT_MESH } from "../projection/sightlines";
 import { placedCopy } from "../step";
 import { meshTriangles } from "../mesh";
 import type { KernelContext } from "../context";
@@ -51,7 +52,8 @@ export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
   run(input, ctx) {
     const parts = input.parts.map((part) => {
       const built = ctx.buildPart(part);
-      return { partId: part.id, views: projectShape(ctx.oc, built.shape.wrapped, viewsForPart(part, input.defaultViews)) };
+      const sightMesh = () => meshTriangles(ctx.kernel, built.shape, SIGHT_MESH);
+      return { partId: part.id, views: projectShape(ctx.oc, built.shape.wrapped, viewsForPart(part, input.defaultViews), sightMesh) };
     });
     if (!input.assembly || input.assembly.parts.length === 0) return { parts };
     // Front and side by side: the side view shows how the parts stack and hook; they fit a sheet at 1:1 more often than three views.
@@ -80,7 +82,8 @@ export const projectTask = defineTask<ProjectTaskInput, ProjectTaskOutput>({
       }
       const compound = ctx.r.makeCompound(copies);
       try {
-        return { parts, assembly: { views: projectShape(ctx.oc, compound.wrapped, frames), anchors } };
+        const sightMesh = () => meshTriangles(ctx.kernel, compound, SIGHT_MESH);
+        return { parts, assembly: { views: projectShape(ctx.oc, compound.wrapped, frames, sightMesh), anchors } };
       } finally {
         compound.delete();
       }
