@@ -1,5 +1,6 @@
 /**
- * The orthographic views of one solid: exact hidden lines, cleaned, with centre marks.
+ * The orthographic views of one solid: hidden lines (exact, or by sight lines where the exact algorithm is
+ * slow), cleaned, with centre marks.
  */
 import type { OpenCascadeInstance, TopoDS_Shape } from "replicad-opencascadejs";
 import { axisVector, type ProjectedView, type ViewEdge } from "@/engine/drawing/projection";
@@ -22,11 +23,16 @@ export function projectShape(oc: OpenCascadeInstance, shape: TopoDS_Shape, frame
   return frames.map((frame) => {
     let raw: ViewEdge[] | undefined;
     if (freeForm && sightMesh) {
-      const plan = planSightLines(oc, shape, frame);
+      let plan: ReturnType<typeof planSightLines> | undefined;
       try {
+        plan = planSightLines(oc, shape, frame);
         if (plan.pays) raw = plan.project((mesh ??= sightMesh()));
+      } catch {
+        // The exact algorithm below is the reference the sight lines are tested against: a view they
+        // cannot work out (a triangulation that fails) is drawn the slow way rather than not at all.
+        raw = undefined;
       } finally {
-        plan.dispose();
+        plan?.dispose();
       }
     }
     raw ??= projectEdges(oc, shape, frame);
