@@ -38,7 +38,7 @@ interface Group<C> {
   hidden: Interval[];
 }
 
-function lineCarrier(from: ViewPoint, to: ViewPoint): { carrier: LineCarrier } | undefined {
+function lineCarrier(from: ViewPoint, to: ViewPoint): LineCarrier | undefined {
   let ux = to.x - from.x;
   let uy = to.y - from.y;
   const len = Math.hypot(ux, uy);
@@ -50,7 +50,7 @@ function lineCarrier(from: ViewPoint, to: ViewPoint): { carrier: LineCarrier } |
     uy = -uy;
   }
   const offset = -uy * from.x + ux * from.y;
-  return { carrier: { ux, uy, offset } };
+  return { ux, uy, offset };
 }
 
 /** Distance of a point from a carrier line. */
@@ -168,7 +168,7 @@ export function cleanEdges(raw: ViewEdge[], tol = CLEANUP_TOLERANCE_MM): ViewEdg
     if (c.type === "line") {
       const lc = lineCarrier(c.from, c.to);
       if (!lc) continue;
-      const g = findOrAdd(lines, lc.carrier, (x) => onLine(x, c.from, c.to, tol));
+      const g = findOrAdd(lines, lc, (x) => onLine(x, c.from, c.to, tol));
       // Measured along the group's own carrier: a nearly vertical segment may point the other way.
       const t0 = g.carrier.ux * c.from.x + g.carrier.uy * c.from.y;
       const t1 = g.carrier.ux * c.to.x + g.carrier.uy * c.to.y;

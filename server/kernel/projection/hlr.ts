@@ -18,13 +18,38 @@ import { arcThrough, classifySamples } from "./classify";
 
 const SAMPLES_PER_CURVE = 24;
 
-interface Deletable {
+export interface Deletable {
   delete(): void;
 }
 
 /** Marks tangent-continuous edges as smooth, once per shape, before any view is projected. */
 export function encodeRegularity(oc: OpenCascadeInstance, shape: TopoDS_Shape): void {
   oc.BRepLib.EncodeRegularity(shape, 1e-10);
+}
+
+/**
+ * `HLRBRep_Algo` loaded with `shape` and our camera for `frame`, updated (outlines found) but not yet
+ * hidden; it and its helpers go to `trash`.
+ */
+export function preparedAlgo(oc: OpenCascadeInstance, shape: TopoDS_Shape, frame: ViewFrame, trash: Deletable[]) {
+  const keep = <T extends Deletable>(o: T): T => {
+    trash.push(o);
+    return o;
+  };
+  const t = axisVector(frame.towardViewer);
+  const r = axisVector(frame.right);
+  // The projector's main direction points toward the eye; its X direction is the view's right, and
+  // Y = main × X is then the view's up (right × up = toward the viewer).
+  const origin = keep(new oc.gp_Pnt(0, 0, 0));
+  const main = keep(new oc.gp_Dir(t.x, t.y, t.z));
+  const xDir = keep(new oc.gp_Dir(r.x, r.y, r.z));
+  const ax2 = keep(new oc.gp_Ax2(origin, main, xDir));
+  const projector = keep(new oc.HLRAlgo_Projector(ax2));
+  const algo = keep(new oc.HLRBRep_Algo());
+  algo.Add(shape, 0);
+  algo.Projector(projector);
+  algo.Update();
+  return algo;
 }
 
 /** Projects `shape` as seen in `frame`; edges in the view's frame (x = frame.right, y = frame.up), mm. */
@@ -35,21 +60,9 @@ export function projectEdges(oc: OpenCascadeInstance, shape: TopoDS_Shape, frame
     return o;
   };
   try {
-    const t = axisVector(frame.towardViewer);
-    const r = axisVector(frame.right);
-    // The projector's main direction points toward the eye; its X direction is the view's right, and
-    // Y = main × X is then the view's up (right × up = toward the viewer).
-    const origin = keep(new oc.gp_Pnt(0, 0, 0));
-    const main = keep(new oc.gp_Dir(t.x, t.y, t.z));
-    const xDir = keep(new oc.gp_Dir(r.x, r.y, r.z));
-    const ax2 = keep(new oc.gp_Ax2(origin, main, xDir));
-    const algo = new oc.HLRBRep_Algo();
-    algo.Add(shape, 0);
-    const projector = keep(new oc.HLRAlgo_Projector(ax2));
-    algo.Projector(projector);
-    algo.Update();
+    const algo = preparedAlgo(oc, shape, frame, trash);
     algo.Hide();
-    const toShape = new oc.HLRBRep_HLRToShape(algo);
+    const toShape = keep(new oc.HLRBRep_HLRToShape(algo));
     const compounds: [TopoDS_Shape, "visible" | "hidden"][] = [
       [toShape.VCompound(), "visible"],
       [toShape.OutLineVCompound(), "visible"],
@@ -71,8 +84,6 @@ export function projectEdges(oc: OpenCascadeInstance, shape: TopoDS_Shape, frame
         current.delete();
       }
     }
-    toShape.delete();
-    algo.delete();
     return edges;
   } finally {
     for (const o of trash.reverse()) o.delete();

@@ -27,7 +27,9 @@ import type { OpenCascadeInstance, TopoDS_Shape } from "replicad-opencascadejs";
 import type { ViewEdge, ViewPoint } from "@/engine/drawing/projection";
 import { axisVector } from "@/engine/drawing/projection";
 import type { ViewFrame } from "@/engine/drawing/views";
-import { arcThrough, classifySamples, distanceToSegment } from "./classify";
+import { arcThrough, classifySamples } from "./classify";
+import { distanceToCurve } from "./cleanup";
+import { preparedAlgo, type Deletable } from "./hlr";
 
 /**
  * The triangulation the sight lines are tested against: 0.01 mm chordal deviation (the angular limit is
@@ -49,10 +51,6 @@ interface Vec3 {
   x: number;
   y: number;
   z: number;
-}
-
-interface Deletable {
-  delete(): void;
 }
 
 /** One drawn curve: its samples in 3D with their curve parameters, and how to write it exactly in 2D. */
@@ -192,20 +190,7 @@ function sharpCurves(oc: OpenCascadeInstance, shape: TopoDS_Shape, toward: Vec3,
 /** The silhouettes of the shape for this view (OpenCascade's outliner, without the hiding pass), in 3D. */
 function outlineCurves(oc: OpenCascadeInstance, shape: TopoDS_Shape, frame: ViewFrame, toward: Vec3, trash: Deletable[]): SampledCurve[] {
   const curves: SampledCurve[] = [];
-  const t = axisVector(frame.towardViewer);
-  const r = axisVector(frame.right);
-  const origin = new oc.gp_Pnt(0, 0, 0);
-  const main = new oc.gp_Dir(t.x, t.y, t.z);
-  const xDir = new oc.gp_Dir(r.x, r.y, r.z);
-  const ax2 = new oc.gp_Ax2(origin, main, xDir);
-  trash.push(origin, main, xDir, ax2);
-  const algo = new oc.HLRBRep_Algo();
-  trash.push(algo);
-  algo.Add(shape, 0);
-  const projector = new oc.HLRAlgo_Projector(ax2);
-  trash.push(projector);
-  algo.Projector(projector);
-  algo.Update();
+  const algo = preparedAlgo(oc, shape, frame, trash);
   algo.ShowAll();
   const toShape = new oc.HLRBRep_HLRToShape(algo);
   trash.push(toShape);
@@ -218,13 +203,6 @@ function outlineCurves(oc: OpenCascadeInstance, shape: TopoDS_Shape, frame: View
     });
   }
   return curves;
-}
-
-/** Distance from p to the polyline through pts. */
-function distanceToPolyline(p: Projected, pts: Projected[]): number {
-  let best = Infinity;
-  for (let i = 0; i + 1 < pts.length; i++) best = Math.min(best, distanceToSegment(p, pts[i]!, pts[i + 1]!));
-  return best;
 }
 
 /** A B-spline, Bézier or other curve without a closed form (an intersection curve of two cylinders). */
@@ -275,19 +253,65 @@ function exactIsSlow(curves: SampledCurve[], projected: Projected[][]): boolean 
       if (j === i) return false;
       const b = boxes[j]!;
       if (b.minX > box.maxX + tol || b.maxX < box.minX - tol || b.minY > box.maxY + tol || b.maxY < box.minY - tol) return false;
-      const near = probe.filter((q) => distanceToPolyline(q, other) < tol).length;
+      const near = probe.filter((q) => distanceToCurve(q, { type: "polyline", points: other }) < tol).length;
       return near >= 0.6 * probe.length;
     });
   });
 }
 
+/**
+ * Boxes in a uniform grid of square cells over the view: each box is listed (as a number) in every cell
+ * it touches, and a cell's list is found from a point.
+ */
+class BoxGrid {
+  private readonly cells = new Map<number, number[]>();
+
+  constructor(
+    private readonly x0: number,
+    private readonly y0: number,
+    private readonly size: number,
+  ) {}
+
+  /** Cell column and row of a point. */
+  cellOf(x: number, y: number): [number, number] {
+    return [Math.floor((x - this.x0) / this.size), Math.floor((y - this.y0) / this.size)];
+  }
+
+  private static key(cx: number, cy: number): number {
+    return cx * 100_003 + cy;
+  }
+
+  add(minX: number, minY: number, maxX: number, maxY: number, ...values: number[]): void {
+    const [cx0, cy0] = this.cellOf(minX, minY);
+    const [cx1, cy1] = this.cellOf(maxX, maxY);
+    for (let cx = cx0; cx <= cx1; cx++) {
+      for (let cy = cy0; cy <= cy1; cy++) {
+        const key = BoxGrid.key(cx, cy);
+        let list = this.cells.get(key);
+        if (!list) this.cells.set(key, (list = []));
+        list.push(...values);
+      }
+    }
+  }
+
+  at(x: number, y: number): number[] | undefined {
+    const [cx, cy] = this.cellOf(x, y);
+    return this.cells.get(BoxGrid.key(cx, cy));
+  }
+
+  /** Every non-empty cell with its column, row and list. */
+  *entries(): Generator<[number, number, number[]]> {
+    for (const [key, list] of this.cells) {
+      const cx = Math.round(key / 100_003);
+      yield [cx, key - cx * 100_003, list];
+    }
+  }
+}
+
 /** Triangles that can hide something (not edge-on), projected, in a uniform grid over the view. */
 class Occluders {
-  private readonly cells = new Map<number, number[]>();
+  private readonly grid: BoxGrid;
   private readonly tri: Float64Array;
-  private readonly size: number;
-  private readonly x0: number;
-  private readonly y0: number;
 
   constructor(positions: Float32Array, indices: Uint32Array, project: Projector, toward: Vec3) {
     const n = indices.length / 3;
@@ -325,35 +349,24 @@ class Occluders {
       maxX = Math.max(maxX, pa.x, pb.x, pc.x);
       maxY = Math.max(maxY, pa.y, pb.y, pc.y);
     }
-    this.x0 = Number.isFinite(minX) ? minX : 0;
-    this.y0 = Number.isFinite(minY) ? minY : 0;
     const span = Number.isFinite(maxX) ? Math.max(maxX - minX, maxY - minY, 1) : 1;
-    this.size = span / 96;
+    this.grid = new BoxGrid(Number.isFinite(minX) ? minX : 0, Number.isFinite(minY) ? minY : 0, span / 96);
+    const t = this.tri;
     for (const i of keep) {
-      const t = this.tri;
       const o = i * 9;
-      const cx0 = this.cell(Math.min(t[o]!, t[o + 3]!, t[o + 6]!) - 1e-6, this.x0);
-      const cx1 = this.cell(Math.max(t[o]!, t[o + 3]!, t[o + 6]!) + 1e-6, this.x0);
-      const cy0 = this.cell(Math.min(t[o + 1]!, t[o + 4]!, t[o + 7]!) - 1e-6, this.y0);
-      const cy1 = this.cell(Math.max(t[o + 1]!, t[o + 4]!, t[o + 7]!) + 1e-6, this.y0);
-      for (let cx = cx0; cx <= cx1; cx++) {
-        for (let cy = cy0; cy <= cy1; cy++) {
-          const key = cx * 100_003 + cy;
-          let list = this.cells.get(key);
-          if (!list) this.cells.set(key, (list = []));
-          list.push(i);
-        }
-      }
+      this.grid.add(
+        Math.min(t[o]!, t[o + 3]!, t[o + 6]!) - 1e-6,
+        Math.min(t[o + 1]!, t[o + 4]!, t[o + 7]!) - 1e-6,
+        Math.max(t[o]!, t[o + 3]!, t[o + 6]!) + 1e-6,
+        Math.max(t[o + 1]!, t[o + 4]!, t[o + 7]!) + 1e-6,
+        i,
+      );
     }
-  }
-
-  private cell(v: number, origin: number): number {
-    return Math.floor((v - origin) / this.size);
   }
 
   /** True when a triangle covers (x, y) nearer the viewer than depth d + margin. */
   hides(p: Projected): boolean {
-    const list = this.cells.get(this.cell(p.x, this.x0) * 100_003 + this.cell(p.y, this.y0));
+    const list = this.grid.at(p.x, p.y);
     if (!list) return false;
     const t = this.tri;
     for (const i of list) {
@@ -394,44 +407,28 @@ function crossings(curves: Projected[][]): number[][] {
     }
   }
   if (!Number.isFinite(minX)) return cuts;
-  const size = Math.max(maxX - minX, maxY - minY, 1) / 128;
-  const cellOf = (v: number, origin: number) => Math.floor((v - origin) / size);
+  const grid = new BoxGrid(minX, minY, Math.max(maxX - minX, maxY - minY, 1) / 128);
   // Each segment in every grid cell its box touches; a pair is tested only in the first cell both touch.
-  const boxes: number[][] = curves.map(() => []);
-  const grid = new Map<number, number[]>();
+  const firstCells: number[][] = curves.map(() => []);
   curves.forEach((pts, c) => {
-    const box = boxes[c]!;
     for (let s = 0; s + 1 < pts.length; s++) {
       const a = pts[s]!;
       const b = pts[s + 1]!;
-      const cx0 = cellOf(Math.min(a.x, b.x), minX);
-      const cx1 = cellOf(Math.max(a.x, b.x), minX);
-      const cy0 = cellOf(Math.min(a.y, b.y), minY);
-      const cy1 = cellOf(Math.max(a.y, b.y), minY);
-      box.push(cx0, cx1, cy0, cy1);
-      for (let cx = cx0; cx <= cx1; cx++) {
-        for (let cy = cy0; cy <= cy1; cy++) {
-          const key = cx * 100_003 + cy;
-          let list = grid.get(key);
-          if (!list) grid.set(key, (list = []));
-          list.push(c, s);
-        }
-      }
+      firstCells[c]!.push(...grid.cellOf(Math.min(a.x, b.x), Math.min(a.y, b.y)));
+      grid.add(Math.min(a.x, b.x), Math.min(a.y, b.y), Math.max(a.x, b.x), Math.max(a.y, b.y), c, s);
     }
   });
-  for (const [key, list] of grid) {
-    const cx = Math.round(key / 100_003);
-    const cy = key - cx * 100_003;
+  for (const [cx, cy, list] of grid.entries()) {
     for (let i = 0; i < list.length; i += 2) {
       const ca = list[i]!;
       const sa = list[i + 1]!;
-      const ba = boxes[ca]!;
+      const fa = firstCells[ca]!;
       for (let j = i + 2; j < list.length; j += 2) {
         const cb = list[j]!;
         if (ca === cb) continue;
         const sb = list[j + 1]!;
-        const bb = boxes[cb]!;
-        if (Math.max(ba[sa * 4]!, bb[sb * 4]!) !== cx || Math.max(ba[sa * 4 + 2]!, bb[sb * 4 + 2]!) !== cy) continue;
+        const fb = firstCells[cb]!;
+        if (Math.max(fa[sa * 2]!, fb[sb * 2]!) !== cx || Math.max(fa[sa * 2 + 1]!, fb[sb * 2 + 1]!) !== cy) continue;
         const hit = segmentCrossing(curves[ca]![sa]!, curves[ca]![sa + 1]!, curves[cb]![sb]!, curves[cb]![sb + 1]!);
         if (!hit) continue;
         cuts[ca]!.push(sa + hit[0]);
